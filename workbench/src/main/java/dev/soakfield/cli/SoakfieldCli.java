@@ -1,0 +1,24 @@
+package dev.soakfield.cli;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The {@code soakfield} command: entry point of the application jar. */
+@Command(
+    name = "soakfield",
+    mixinStandardHelpOptions = true,
+    versionProvider = VersionProvider.class,
+    description = "Predicts how moisture and hydrogen get into 3D parts.",
+    subcommands = {CommandLine.HelpCommand.class})
+public final class SoakfieldCli implements Runnable {
+  @CommandLine.Spec CommandLine.Model.CommandSpec spec;
+
+  @Override
+  public void run() {
+    spec.commandLine().usage(spec.commandLine().getOut());
+  }
+
+  public static void main(String[] args) {
+    System.exit(ExitCodes.execute(new SoakfieldCli(), args));
+  }
+}
