@@ -9,7 +9,12 @@ import picocli.CommandLine.Command;
     mixinStandardHelpOptions = true,
     versionProvider = VersionProvider.class,
     description = "Predicts how moisture and hydrogen get into 3D parts.",
-    subcommands = {CommandLine.HelpCommand.class})
+    subcommands = {
+      MeshCommand.class,
+      InfoCommand.class,
+      BenchCommand.class,
+      CommandLine.HelpCommand.class
+    })
 public final class SoakfieldCli implements Runnable {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 

@@ -1,0 +1,49 @@
+package dev.soakfield.mesh;
+
+import java.io.IOException;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+
+/**
+ * Writes a file so that readers see either the old content or the complete new one, never a
+ * partial file: the content goes to a temporary file beside the target, which is then renamed.
+ */
+public final class AtomicFiles {
+  /** Writes the content of one file to the path it is given. */
+  @FunctionalInterface
+  public interface Writer {
+    void writeTo(Path file) throws IOException;
+  }
+
+  private AtomicFiles() {}
+
+  /**
+   * Runs {@code writer} on a temporary file in the target's folder and renames the result onto
+   * {@code target}. On failure the temporary file is removed and {@code target} is untouched.
+   */
+  public static void write(Path target, Writer writer) throws IOException {
+    Path abs = target.toAbsolutePath();
+    Path dir = abs.getParent();
+    if (dir != null) {
+      Files.createDirectories(dir);
+    }
+    Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".part");
+    boolean done = false;
+    try {
+      writer.writeTo(tmp);
+      try {
+        Files.move(
+            tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+      } catch (AtomicMoveNotSupportedException e) {
+        Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
+      }
+      done = true;
+    } finally {
+      if (!done) {
+        Files.deleteIfExists(tmp);
+      }
+    }
+  }
+}

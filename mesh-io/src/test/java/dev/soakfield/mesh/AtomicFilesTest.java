@@ -1,0 +1,54 @@
+package dev.soakfield.mesh;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class AtomicFilesTest {
+  @TempDir Path dir;
+
+  private long filesIn(Path d) throws IOException {
+    try (Stream<Path> s = Files.list(d)) {
+      return s.count();
+    }
+  }
+
+  @Test
+  void finishedWriteReplacesTheTarget() throws IOException {
+    Path target = dir.resolve("out.txt");
+    Files.writeString(target, "old");
+    AtomicFiles.write(target, f -> Files.writeString(f, "new"));
+    assertEquals("new", Files.readString(target));
+    assertEquals(1, filesIn(dir));
+  }
+
+  @Test
+  void failedWriteLeavesTheOldFileAndNoTemporary() throws IOException {
+    Path target = dir.resolve("out.txt");
+    Files.writeString(target, "old");
+    assertThrows(
+        IOException.class,
+        () ->
+            AtomicFiles.write(
+                target,
+                f -> {
+                  Files.writeString(f, "half");
+                  throw new IOException("disk full");
+                }));
+    assertEquals("old", Files.readString(target));
+    assertEquals(1, filesIn(dir));
+  }
+
+  @Test
+  void createsMissingFolders() throws IOException {
+    Path target = dir.resolve("a/b/out.txt");
+    AtomicFiles.write(target, f -> Files.writeString(f, "x"));
+    assertEquals("x", Files.readString(target));
+  }
+}

@@ -1,0 +1,18 @@
+package dev.soakfield.cli;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import picocli.CommandLine;
+
+/** Runs the soakfield command in-process and captures its exit code and output. */
+record CliRun(int exitCode, String out, String err) {
+  static CliRun of(String... args) {
+    StringWriter out = new StringWriter();
+    StringWriter err = new StringWriter();
+    CommandLine cl = ExitCodes.configure(new CommandLine(new SoakfieldCli()));
+    cl.setOut(new PrintWriter(out, true));
+    cl.setErr(new PrintWriter(err, true));
+    int code = cl.execute(args);
+    return new CliRun(code, out.toString(), err.toString());
+  }
+}
