@@ -498,4 +498,45 @@ class MeshAssemblerTest {
     assertEquals(MeshFinding.Severity.WARNING, only(result, "low-dihedral").severity());
     assertFalse(result.report().hasErrors());
   }
+
+  @Test
+  void edgeSharedByFourExteriorFacesBreaksPatches() {
+    // Two unit cubes of a 2 x 2 x 1 box, diagonal to each other, touch along the edge x = y = 1.
+    TestMeshes.Grid grid = new TestMeshes.Grid(2, 2, 1, 1.0);
+    RawMesh full = grid.raw(c -> 1, false);
+    RawMesh raw = new RawMesh();
+    raw.xyz = full.xyz;
+    raw.nodeIds = full.nodeIds;
+    raw.tets = new int[48];
+    raw.tetTags = new int[12];
+    raw.tetIds = new long[12];
+    int t = 0;
+    for (int cell : new int[] {grid.cell(0, 0, 0), grid.cell(1, 1, 0)}) {
+      for (int k = 0; k < 6; k++) {
+        System.arraycopy(full.tets, 4 * (6 * cell + k), raw.tets, 4 * t, 4);
+        raw.tetTags[t] = 1;
+        raw.tetIds[t] = full.tetIds[6 * cell + k];
+        t++;
+      }
+    }
+    MeshImport result = MeshAssembler.assemble(raw, new AssemblyOptions(100.0));
+    // Each cube's sides join (90 < 100 degrees), but not across the shared edge: exact geometry,
+    // two patches of area 6.
+    assertEquals(2, result.mesh().faceGroups().size());
+    assertEquals(6.0, area(result.mesh(), "patch-1"), EPS);
+    assertEquals(6.0, area(result.mesh(), "patch-2"), EPS);
+    // The corner nodes (2,0,z) and (0,2,z) of the box belong to neither cube.
+    assertTrue(only(result, "unused-nodes").message().startsWith("4 nodes"));
+  }
+
+  @Test
+  void longIdListsAreCutAfterTwenty() {
+    double[] xyz = new double[3 * 29];
+    double[] tet = {0, 0, 0, 1, 0, 0, 0, 1, 0, 0, 0, 1};
+    System.arraycopy(tet, 0, xyz, 0, 12);
+    RawMesh raw = TestMeshes.tets(xyz, 0, 1, 2, 3);
+    MeshFinding f = only(assemble(raw), "unused-nodes");
+    assertTrue(f.message().startsWith("25 nodes"), f.message());
+    assertTrue(f.message().endsWith("24 (and 5 more)"), f.message());
+  }
 }
