@@ -539,4 +539,24 @@ class MeshAssemblerTest {
     assertTrue(f.message().startsWith("25 nodes"), f.message());
     assertTrue(f.message().endsWith("24 (and 5 more)"), f.message());
   }
+
+  @Test
+  void clashingGroupNamesAreMadeUnique() {
+    TestMeshes.Grid grid = new TestMeshes.Grid(2, 1, 1, 1.0);
+    RawMesh raw = grid.raw(c -> c + 1, false);
+    raw.volumeNames.put(1, "body");
+    raw.volumeNames.put(2, "body");
+    // A user group called "untagged" keeps its name; the faces nobody tagged get another.
+    raw.surfaceNames.put(9, FaceGroup.UNTAGGED);
+    TestMeshes.addTriangles(raw, grid.sideTriangles(0, 0, 0, 0, 0), 9, 1);
+    MeshImport result = assemble(raw);
+    TetMesh mesh = result.mesh();
+    assertEquals("body", mesh.volumeGroups().get(0).name());
+    assertEquals("body-2", mesh.volumeGroups().get(1).name());
+    assertEquals(9, mesh.faceGroups().get(mesh.faceGroupIndex(FaceGroup.UNTAGGED)).tag());
+    // Exact geometry: the user's group is the unit side x = 0, the rest of the box has area 9.
+    assertEquals(1.0, area(mesh, FaceGroup.UNTAGGED), EPS);
+    assertEquals(9.0, area(mesh, FaceGroup.UNTAGGED + "-2"), EPS);
+    assertEquals(2, result.report().withCode("group-name-clash").size());
+  }
 }
