@@ -45,26 +45,20 @@ public final class MidEdgeNodes {
     }
     int[] tets = linear.copyTets();
     int[] faces = linear.copyFaces();
-    // Face edges join the keys too, so a face that is no tetrahedron's face still gets its nodes.
-    long[] keys = new long[(int) keyCount];
-    int p = 0;
-    for (int t = 0; t < tetCount; t++) {
-      for (int[] e : TET_EDGES) {
-        keys[p++] = key(tets[4 * t + e[0]], tets[4 * t + e[1]]);
-      }
-    }
-    for (int f = 0; f < faceCount; f++) {
-      for (int[] e : FACE_EDGES) {
-        keys[p++] = key(faces[3 * f + e[0]], faces[3 * f + e[1]]);
-      }
-    }
-    Arrays.sort(keys);
-    int edges = unique(keys);
+    // Face edges join the table too, so a face that is no tetrahedron's face still gets its nodes.
+    EdgeTable table =
+        new EdgeTable(
+            nodes,
+            new int[][] {tets, faces},
+            new int[] {4, 3},
+            new int[][][] {TET_EDGES, FACE_EDGES});
+    int edges = table.edgeCount();
 
     double[] xyz = Arrays.copyOf(linear.copyCoordinates(), 3 * (nodes + edges));
+    int[] ends = table.endpoints();
     for (int e = 0; e < edges; e++) {
-      int a = (int) (keys[e] >>> 32);
-      int b = (int) keys[e];
+      int a = ends[2 * e];
+      int b = ends[2 * e + 1];
       int m = 3 * (nodes + e);
       xyz[m] = 0.5 * (xyz[3 * a] + xyz[3 * b]);
       xyz[m + 1] = 0.5 * (xyz[3 * a + 1] + xyz[3 * b + 1]);
@@ -77,7 +71,7 @@ public final class MidEdgeNodes {
       for (int k = 0; k < 6; k++) {
         int a = tets[4 * t + TET_EDGES[k][0]];
         int b = tets[4 * t + TET_EDGES[k][1]];
-        tets10[10 * t + 4 + k] = nodes + Arrays.binarySearch(keys, 0, edges, key(a, b));
+        tets10[10 * t + 4 + k] = nodes + table.edge(a, b);
       }
     }
     int[] faces6 = new int[6 * faceCount];
@@ -86,7 +80,7 @@ public final class MidEdgeNodes {
       for (int k = 0; k < 3; k++) {
         int a = faces[3 * f + FACE_EDGES[k][0]];
         int b = faces[3 * f + FACE_EDGES[k][1]];
-        faces6[6 * f + 3 + k] = nodes + Arrays.binarySearch(keys, 0, edges, key(a, b));
+        faces6[6 * f + 3 + k] = nodes + table.edge(a, b);
       }
     }
     return new TetMesh.Builder()
@@ -97,26 +91,5 @@ public final class MidEdgeNodes {
         .volumeGroups(linear.volumeGroups())
         .faceGroups(linear.faceGroups())
         .build();
-  }
-
-  /** Order-independent key of the edge between nodes a and b (both non-negative). */
-  static long key(int a, int b) {
-    int lo = Math.min(a, b);
-    int hi = Math.max(a, b);
-    return ((long) lo << 32) | hi;
-  }
-
-  /** Compacts a sorted array to its distinct values in front; returns how many there are. */
-  private static int unique(long[] sorted) {
-    if (sorted.length == 0) {
-      return 0;
-    }
-    int n = 1;
-    for (int i = 1; i < sorted.length; i++) {
-      if (sorted[i] != sorted[n - 1]) {
-        sorted[n++] = sorted[i];
-      }
-    }
-    return n;
   }
 }
