@@ -3,6 +3,7 @@ package dev.soakfield.mesh.gen;
 import dev.soakfield.mesh.FaceGroup;
 import dev.soakfield.mesh.FaceGroupKind;
 import dev.soakfield.mesh.VolumeGroup;
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -64,7 +65,7 @@ final class RoundGrid {
     int cells = (m * m + nAround * nRadial) * nz;
     int[] corners = new int[8 * cells];
     int[] sideGroup = new int[6 * cells];
-    java.util.Arrays.fill(sideGroup, HexGrid.NO_FACE);
+    Arrays.fill(sideGroup, HexGrid.NO_FACE);
     int cell = 0;
     for (int k = 0; k < nz; k++) {
       for (int j = 0; j < m; j++) {
@@ -138,7 +139,7 @@ final class RoundGrid {
     int cells = nAround * nRadial * nz;
     int[] corners = new int[8 * cells];
     int[] sideGroup = new int[6 * cells];
-    java.util.Arrays.fill(sideGroup, HexGrid.NO_FACE);
+    Arrays.fill(sideGroup, HexGrid.NO_FACE);
     int cell = 0;
     for (int k = 0; k < nz; k++) {
       for (int r = 0; r < nRadial; r++) {
