@@ -1,0 +1,104 @@
+package dev.soakfield.mesh.vtk;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.nio.charset.StandardCharsets;
+
+/**
+ * One VTK DataArray to be written: a name, a VTK scalar type, a component count and the values,
+ * held as {@code double[]} (Float64) or {@code int[]} (Int64, Int32, UInt8, widened or narrowed on
+ * output). Writes itself as ASCII text or as little-endian bytes.
+ */
+final class VtkArray {
+  enum Type {
+    FLOAT64("Float64", 8),
+    INT64("Int64", 8),
+    INT32("Int32", 4),
+    UINT8("UInt8", 1);
+
+    final String vtkName;
+    final int bytes;
+
+    Type(String vtkName, int bytes) {
+      this.vtkName = vtkName;
+      this.bytes = bytes;
+    }
+  }
+
+  private static final int VALUES_PER_LINE = 12;
+  private static final int CHUNK = 1 << 16;
+
+  final String name;
+  final Type type;
+  final int components;
+  private final double[] doubles;
+  private final int[] ints;
+
+  private VtkArray(String name, Type type, int components, double[] doubles, int[] ints) {
+    this.name = name;
+    this.type = type;
+    this.components = components;
+    this.doubles = doubles;
+    this.ints = ints;
+  }
+
+  static VtkArray float64(String name, int components, double[] values) {
+    return new VtkArray(name, Type.FLOAT64, components, values, null);
+  }
+
+  static VtkArray integers(String name, Type type, int components, int[] values) {
+    return new VtkArray(name, type, components, null, values);
+  }
+
+  int length() {
+    return doubles != null ? doubles.length : ints.length;
+  }
+
+  long byteCount() {
+    return (long) length() * type.bytes;
+  }
+
+  void writeAscii(OutputStream out) throws IOException {
+    StringBuilder line = new StringBuilder(256);
+    int n = length();
+    for (int i = 0; i < n; i++) {
+      if (i % VALUES_PER_LINE == 0) {
+        line.append("          ");
+      } else {
+        line.append(' ');
+      }
+      // Double.toString gives the shortest text that reads back to the same double.
+      if (doubles != null) {
+        line.append(doubles[i]);
+      } else {
+        line.append(ints[i]);
+      }
+      if (i % VALUES_PER_LINE == VALUES_PER_LINE - 1 || i == n - 1) {
+        line.append('\n');
+        out.write(line.toString().getBytes(StandardCharsets.US_ASCII));
+        line.setLength(0);
+      }
+    }
+  }
+
+  /** The values as little-endian bytes, without a header. */
+  void writeBytes(OutputStream out) throws IOException {
+    ByteBuffer buf = ByteBuffer.allocate(CHUNK).order(ByteOrder.LITTLE_ENDIAN);
+    int n = length();
+    for (int i = 0; i < n; i++) {
+      if (buf.remaining() < 8) {
+        out.write(buf.array(), 0, buf.position());
+        buf.clear();
+      }
+      switch (type) {
+        case FLOAT64 -> buf.putDouble(doubles[i]);
+        case INT64 -> buf.putLong(ints[i]);
+        case INT32 -> buf.putInt(ints[i]);
+        case UINT8 -> buf.put((byte) ints[i]);
+      }
+    }
+    out.write(buf.array(), 0, buf.position());
+  }
+}
