@@ -140,6 +140,8 @@ final class FaceGrouping {
       for (int t = 0; t < triCount; t++) {
         if (triFace[t] >= 0) {
           TetFaces.writeOutward(tets, nodesPerTet, triFace[t], faces, next * nodesPerTri);
+          alignToFile(faces, next * nodesPerTri, nodesPerTri, raw.tris, t * nodesPerTri,
+              triPlace[t] == INTERIOR);
           int g = tags.indexOf(t);
           faceGroup[next++] = triPlace[t] == EXTERIOR ? exteriorGroup[g] : interfaceGroup[g];
         }
@@ -186,6 +188,48 @@ final class FaceGrouping {
               "face group names occur twice, renamed: " + String.join(", ", names.renames())));
     }
     return new FaceGrouping(faces, faceGroup, groups);
+  }
+
+  /**
+   * Rotates the face just written at {@code at} so that it starts at the file triangle's first
+   * corner, and, for interface faces ({@code keepSide}), turns it to the file's side: a mesh that
+   * was written and read back then has the very same faces. Exterior faces stay outward.
+   */
+  static void alignToFile(
+      int[] faces, int at, int nodesPerTri, int[] tris, int triAt, boolean keepSide) {
+    int a = faces[at];
+    int b = faces[at + 1];
+    int c = faces[at + 2];
+    int t0 = tris[triAt];
+    int t1 = tris[triAt + 1];
+    boolean sameSide = (t0 == a && t1 == b) || (t0 == b && t1 == c) || (t0 == c && t1 == a);
+    if (keepSide && !sameSide) {
+      // reverse: corners (0,2,1), mid-edge nodes on (0,2), (2,1), (1,0)
+      faces[at + 1] = c;
+      faces[at + 2] = b;
+      if (nodesPerTri == 6) {
+        int m = faces[at + 3];
+        faces[at + 3] = faces[at + 5];
+        faces[at + 5] = m;
+      }
+    }
+    int shift = faces[at + 1] == t0 ? 1 : faces[at + 2] == t0 ? 2 : 0;
+    if (shift != 0) {
+      rotate(faces, at, shift);
+      if (nodesPerTri == 6) {
+        rotate(faces, at + 3, shift);
+      }
+    }
+  }
+
+  /** Rotates three entries so that entry {@code shift} comes first. */
+  private static void rotate(int[] a, int at, int shift) {
+    int x = a[at];
+    int y = a[at + 1];
+    int z = a[at + 2];
+    a[at] = shift == 1 ? y : z;
+    a[at + 1] = shift == 1 ? z : x;
+    a[at + 2] = shift == 1 ? x : y;
   }
 
   private static void nameTaggedGroups(
