@@ -262,6 +262,23 @@ class MshReaderTest {
   }
 
   @Test
+  void binary41WithFourByteSizesAndNoEntities() {
+    // format description: the data size of a 4.1 binary file is sizeof(size_t), 4 or 8
+    MshBytes b = new MshBytes(java.nio.ByteOrder.LITTLE_ENDIAN, 4);
+    b.line("$MeshFormat").line("4.1 1 4").i32(1).line("").line("$EndMeshFormat");
+    b.line("$Nodes").size(1, 4, 10, 13).i32(3, 2, 0).size(4).size(10, 11, 12, 13);
+    b.f64(0, 0, 0).f64(3, 0, 0).f64(0, 3, 0).f64(0, 0, 3).line("").line("$EndNodes");
+    b.line("$Elements").size(1, 1, 5, 5).i32(3, 2, 4).size(1).size(5, 10, 11, 12, 13);
+    RawMesh m = MshReader.read(b.line("").line("$EndElements").bytes(), "small.msh");
+    assertArrayEquals(new int[] {0, 1, 2, 3}, m.tets);
+    assertArrayEquals(new int[] {2}, m.tetTags); // no $Entities: the entity tag, with a warning
+    assertFalse(m.physicalTags);
+    assertTrue(hasFinding(m, "msh-no-physical-groups"));
+    // exact geometry: legs of 3 give volume 27/6
+    assertEquals(27.0 / 6, MeshGeometry.tetVolume(m, 0), 1e-15);
+  }
+
+  @Test
   void crlfLineEndingsAreRead() throws IOException {
     String text = Files.readString(resource("cube_v22_ascii.msh")).replace("\n", "\r\n");
     RawMesh m =
