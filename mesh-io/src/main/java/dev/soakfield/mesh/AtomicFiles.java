@@ -7,8 +7,8 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 
 /**
- * Writes a file so that readers see either the old content or the complete new one, never a
- * partial file: the content goes to a temporary file beside the target, which is then renamed.
+ * Writes a file so that readers see either the old content or the complete new one, never a partial
+ * file: the content goes to a temporary file beside the target, which is then renamed.
  */
 public final class AtomicFiles {
   /** Writes the content of one file to the path it is given. */
@@ -34,8 +34,7 @@ public final class AtomicFiles {
     try {
       writer.writeTo(tmp);
       try {
-        Files.move(
-            tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
       } catch (AtomicMoveNotSupportedException e) {
         Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
       }

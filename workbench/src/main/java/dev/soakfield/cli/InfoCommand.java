@@ -9,10 +9,10 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code soakfield info FILE.msh [--json]}: what a mesh holds and what its import found. */
 @Command(
@@ -45,7 +45,9 @@ final class InfoCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     if (!(featureAngle > 0 && featureAngle < 180)) {
       throw new UserInputException(
-          "--feature-angle: found " + featureAngle + ", expected an angle between 0 and 180 degrees");
+          "--feature-angle: found "
+              + featureAngle
+              + ", expected an angle between 0 and 180 degrees");
     }
     MeshImport imported = MeshLoader.load(file, new AssemblyOptions(featureAngle));
     MeshSummary summary = MeshSummary.of(file.toString(), imported);

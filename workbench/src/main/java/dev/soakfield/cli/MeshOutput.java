@@ -26,7 +26,9 @@ final class MeshOutput {
       description = "10-node tetrahedra (mid-edge nodes) instead of 4-node ones.")
   boolean quadratic;
 
-  @Option(names = "--binary", description = "Binary MSH instead of ASCII (smaller, faster to read).")
+  @Option(
+      names = "--binary",
+      description = "Binary MSH instead of ASCII (smaller, faster to read).")
   boolean binary;
 
   int order() {

@@ -134,7 +134,13 @@ final class MeshSummary {
     }
     out.println();
     out.printf(
-        Locale.ROOT, "%-24s %6s %-9s %10s %14s%n", "face group", "tag", "kind", "faces", "area [m2]");
+        Locale.ROOT,
+        "%-24s %6s %-9s %10s %14s%n",
+        "face group",
+        "tag",
+        "kind",
+        "faces",
+        "area [m2]");
     for (int i = 0; i < m.faceGroups().size(); i++) {
       FaceGroup g = m.faceGroups().get(i);
       out.printf(
@@ -157,7 +163,8 @@ final class MeshSummary {
     out.print("volume ratio  ");
     int[] h = q.volumeRatioHistogram();
     for (int i = 0; i < h.length; i++) {
-      out.printf(Locale.ROOT, "%s%.1f-%.1f: %d", i == 0 ? "" : ", ", i / 10.0, (i + 1) / 10.0, h[i]);
+      out.printf(
+          Locale.ROOT, "%s%.1f-%.1f: %d", i == 0 ? "" : ", ", i / 10.0, (i + 1) / 10.0, h[i]);
     }
     out.println();
     List<MeshFinding> findings = imported.report().findings();

@@ -27,7 +27,13 @@ class MeshAndInfoCommandTest {
     Path msh = dir.resolve("b.msh");
     CliRun made =
         CliRun.of(
-            "mesh", "box", "--size", "0.01,0.01,0.002", "--cells", "10,10,4", "--out",
+            "mesh",
+            "box",
+            "--size",
+            "0.01,0.01,0.002",
+            "--cells",
+            "10,10,4",
+            "--out",
             msh.toString());
     assertEquals(0, made.exitCode(), made.err());
     CliRun info = CliRun.of("info", msh.toString(), "--json");
@@ -54,7 +60,8 @@ class MeshAndInfoCommandTest {
     Path a = dir.resolve("a.msh");
     Path b = dir.resolve("b.msh");
     assertEquals(
-        0, CliRun.of("mesh", "box", "--size", "2mm,3mm,1mm", "--cells", "2,2,1", "--out", "" + a)
+        0,
+        CliRun.of("mesh", "box", "--size", "2mm,3mm,1mm", "--cells", "2,2,1", "--out", "" + a)
             .exitCode());
     assertEquals(
         0,
@@ -68,8 +75,18 @@ class MeshAndInfoCommandTest {
     Path msh = dir.resolve("wall.msh");
     CliRun made =
         CliRun.of(
-            "mesh", "layers", "--size", "0.02,0.01", "--cells", "4,2", "--layer", "skin:1mm:2",
-            "--layer", "core:4mm:4", "--out", msh.toString());
+            "mesh",
+            "layers",
+            "--size",
+            "0.02,0.01",
+            "--cells",
+            "4,2",
+            "--layer",
+            "skin:1mm:2",
+            "--layer",
+            "core:4mm:4",
+            "--out",
+            msh.toString());
     assertEquals(0, made.exitCode(), made.err());
     JsonNode root = new ObjectMapper().readTree(CliRun.of("info", "" + msh, "--json").out());
     Map<String, JsonNode> vols = byName(root.get("volume_groups"));
@@ -83,11 +100,21 @@ class MeshAndInfoCommandTest {
     Path msh = dir.resolve("q.msh");
     assertEquals(
         0,
-        CliRun.of("mesh", "box", "--size", "1,1,1", "--cells", "1,1,1", "--quadratic", "--out", "" + msh)
+        CliRun.of(
+                "mesh",
+                "box",
+                "--size",
+                "1,1,1",
+                "--cells",
+                "1,1,1",
+                "--quadratic",
+                "--out",
+                "" + msh)
             .exitCode());
     JsonNode root = new ObjectMapper().readTree(CliRun.of("info", "" + msh, "--json").out());
     assertEquals(10, root.get("nodes_per_tet").asInt());
-    // one Kuhn-split cube: 8 corners + 12 cube edges + 6 face diagonals + 1 main diagonal = 27 nodes
+    // one Kuhn-split cube: 8 corners + 12 cube edges + 6 face diagonals + 1 main diagonal = 27
+    // nodes
     assertEquals(27, root.get("nodes").asInt());
   }
 
@@ -126,7 +153,8 @@ class MeshAndInfoCommandTest {
     CliRun zero = CliRun.of("mesh", "box", "--size", "1,1,1", "--cells", "0,1,1", "--out", "x.msh");
     assertEquals(ExitCodes.BAD_INPUT, zero.exitCode());
     assertTrue(zero.err().contains("--cells"), zero.err());
-    CliRun unit = CliRun.of("mesh", "box", "--size", "1ft,1,1", "--cells", "1,1,1", "--out", "x.msh");
+    CliRun unit =
+        CliRun.of("mesh", "box", "--size", "1ft,1,1", "--cells", "1,1,1", "--out", "x.msh");
     assertEquals(ExitCodes.BAD_INPUT, unit.exitCode());
     assertTrue(unit.err().contains("'ft'"), unit.err());
     CliRun ext =

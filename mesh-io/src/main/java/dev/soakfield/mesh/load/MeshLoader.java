@@ -6,7 +6,6 @@ import dev.soakfield.mesh.RawMesh;
 import dev.soakfield.mesh.msh.MshReader;
 import dev.soakfield.mesh.topo.AssemblyOptions;
 import dev.soakfield.mesh.topo.MeshAssembler;
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -33,13 +32,7 @@ public final class MeshLoader {
       throw new MeshInputException(
           file.toString(), "", "the extension of '" + name + "'", "a .msh file (MSH 2.2 or 4.1)");
     }
-    RawMesh raw;
-    try {
-      raw = MshReader.read(file);
-    } catch (IOException e) {
-      throw new MeshInputException(
-          file.toString(), "", "a read error (" + e.getMessage() + ")", "a readable file");
-    }
+    RawMesh raw = MshReader.read(file);
     return MeshAssembler.assemble(raw, options);
   }
 }

@@ -17,8 +17,8 @@ import java.util.List;
  * <p>Faces are written in the node order of the tetrahedron they belong to: outward for exterior
  * faces; for interface faces, out of the lower-numbered of the two tetrahedra. Output order: tagged
  * faces in the order of their triangles in the file, then the untagged (or patch) faces in (tet,
- * local face) order. Face groups come in order of the first triangle of their tag, the exterior
- * part of a split tag right before its interface part, the untagged group last.
+ * local face) order. Face groups come in the order the file names them (then by first triangle),
+ * the exterior part of a split tag right before its interface part, the untagged group last.
  */
 final class FaceGrouping {
   private static final byte EXTERIOR = 1;
@@ -132,7 +132,7 @@ final class FaceGrouping {
     NameBook names = new NameBook();
     int next = 0;
     if (triCount > 0) {
-      TagIndex tags = TagIndex.of(raw.triTags);
+      TagIndex tags = TagIndex.of(raw.triTags).namedFirst(raw.surfaceNames);
       int[] exteriorGroup = new int[tags.size()];
       int[] interfaceGroup = new int[tags.size()];
       nameTaggedGroups(
@@ -140,7 +140,12 @@ final class FaceGrouping {
       for (int t = 0; t < triCount; t++) {
         if (triFace[t] >= 0) {
           TetFaces.writeOutward(tets, nodesPerTet, triFace[t], faces, next * nodesPerTri);
-          alignToFile(faces, next * nodesPerTri, nodesPerTri, raw.tris, t * nodesPerTri,
+          alignToFile(
+              faces,
+              next * nodesPerTri,
+              nodesPerTri,
+              raw.tris,
+              t * nodesPerTri,
               triPlace[t] == INTERIOR);
           int g = tags.indexOf(t);
           faceGroup[next++] = triPlace[t] == EXTERIOR ? exteriorGroup[g] : interfaceGroup[g];

@@ -17,9 +17,9 @@ import java.util.Objects;
  * a report of everything noticed on the way.
  *
  * <ul>
- *   <li>Volume groups: one per distinct tetrahedron tag, in order of first appearance in the file;
- *       named by the file's physical name, else "volume-3" (or "entity-3" when the tags are entity
- *       tags).
+ *   <li>Volume groups: one per distinct tetrahedron tag, in the order the file names them, then by
+ *       first appearance; named by the file's physical name, else "volume-3" (or "entity-3" when
+ *       the tags are entity tags).
  *   <li>Tetrahedra keep file order; inverted ones are reordered, flat ones reported.
  *   <li>Face groups: see {@link FaceGrouping}.
  *   <li>Nodes keep file order and ids, unused ones included; coincident ones are reported.
@@ -52,7 +52,7 @@ public final class MeshAssembler {
     double[] xyz = raw.xyz.clone();
     int[] tets = raw.tets.clone();
 
-    TagIndex volumeTags = TagIndex.of(raw.tetTags);
+    TagIndex volumeTags = TagIndex.of(raw.tetTags).namedFirst(raw.volumeNames);
     int[] tetGroup = new int[raw.tetCount()];
     for (int t = 0; t < tetGroup.length; t++) {
       tetGroup[t] = volumeTags.indexOf(t);

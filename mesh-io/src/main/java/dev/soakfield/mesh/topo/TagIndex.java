@@ -1,10 +1,11 @@
 package dev.soakfield.mesh.topo;
 
 import java.util.Arrays;
+import java.util.Map;
 
 /**
- * The distinct values of a tag array in order of first appearance, and each item's dense index into
- * them; by sorting and binary search, without boxing.
+ * The distinct values of a tag array (in order of first appearance unless reordered), and each
+ * item's dense index into them; by sorting and binary search, without boxing.
  */
 final class TagIndex {
   private final int[] distinct;
@@ -41,11 +42,43 @@ final class TagIndex {
     return new TagIndex(distinct, indexOf);
   }
 
+  /**
+   * The same index with the tags that {@code named} lists first, in its order (the order a file
+   * names its groups in), then the rest in order of first appearance; so the groups of a written
+   * mesh come back in the order they were written.
+   */
+  TagIndex namedFirst(Map<Integer, String> named) {
+    int[] newIndex = new int[distinct.length];
+    Arrays.fill(newIndex, -1);
+    int next = 0;
+    for (Integer tag : named.keySet()) {
+      for (int g = 0; g < distinct.length; g++) {
+        if (distinct[g] == tag && newIndex[g] < 0) {
+          newIndex[g] = next++;
+        }
+      }
+    }
+    for (int g = 0; g < distinct.length; g++) {
+      if (newIndex[g] < 0) {
+        newIndex[g] = next++;
+      }
+    }
+    int[] d = new int[distinct.length];
+    for (int g = 0; g < distinct.length; g++) {
+      d[newIndex[g]] = distinct[g];
+    }
+    int[] idx = new int[indexOf.length];
+    for (int i = 0; i < idx.length; i++) {
+      idx[i] = newIndex[indexOf[i]];
+    }
+    return new TagIndex(d, idx);
+  }
+
   int size() {
     return distinct.length;
   }
 
-  /** The g-th distinct tag, in order of first appearance. */
+  /** The g-th distinct tag. */
   int tag(int g) {
     return distinct[g];
   }
