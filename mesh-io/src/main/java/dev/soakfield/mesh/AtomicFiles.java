@@ -5,6 +5,9 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
 
 /**
  * Writes a file so that readers see either the old content or the complete new one, never a partial
@@ -20,6 +23,21 @@ public final class AtomicFiles {
   private AtomicFiles() {}
 
   /**
+   * A temporary file is private to its owner; the finished file gets the permissions of the file it
+   * replaces, or the usual rw-r--r-- when it is new.
+   */
+  private static void keepPermissions(Path tmp, Path target) throws IOException {
+    if (!tmp.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+      return;
+    }
+    Set<PosixFilePermission> perms =
+        Files.exists(target)
+            ? Files.getPosixFilePermissions(target)
+            : PosixFilePermissions.fromString("rw-r--r--");
+    Files.setPosixFilePermissions(tmp, perms);
+  }
+
+  /**
    * Runs {@code writer} on a temporary file in the target's folder and renames the result onto
    * {@code target}. On failure the temporary file is removed and {@code target} is untouched.
    */
@@ -33,6 +51,7 @@ public final class AtomicFiles {
     boolean done = false;
     try {
       writer.writeTo(tmp);
+      keepPermissions(tmp, abs);
       try {
         Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
       } catch (AtomicMoveNotSupportedException e) {

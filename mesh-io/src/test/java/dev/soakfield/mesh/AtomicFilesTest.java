@@ -46,6 +46,25 @@ class AtomicFilesTest {
   }
 
   @Test
+  void newFilesAreReadableByOthersAndReplacedOnesKeepTheirPermissions() throws IOException {
+    org.junit.jupiter.api.Assumptions.assumeTrue(
+        dir.getFileSystem().supportedFileAttributeViews().contains("posix"));
+    Path fresh = dir.resolve("fresh.txt");
+    AtomicFiles.write(fresh, f -> Files.writeString(f, "x"));
+    assertEquals("rw-r--r--", perms(fresh));
+    Path kept = dir.resolve("kept.txt");
+    Files.writeString(kept, "old");
+    Files.setPosixFilePermissions(
+        kept, java.nio.file.attribute.PosixFilePermissions.fromString("rw-rw----"));
+    AtomicFiles.write(kept, f -> Files.writeString(f, "new"));
+    assertEquals("rw-rw----", perms(kept));
+  }
+
+  private static String perms(Path p) throws IOException {
+    return java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(p));
+  }
+
+  @Test
   void createsMissingFolders() throws IOException {
     Path target = dir.resolve("a/b/out.txt");
     AtomicFiles.write(target, f -> Files.writeString(f, "x"));

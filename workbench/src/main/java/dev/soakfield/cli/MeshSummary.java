@@ -182,7 +182,18 @@ final class MeshSummary {
     }
   }
 
-  private static String num(double v) {
-    return String.format(Locale.ROOT, "%.6g", v);
+  /** Six significant digits without trailing zeros: 0.012, 5.4e-07, 0. */
+  static String num(double v) {
+    if (v == 0) {
+      return "0";
+    }
+    String s = String.format(Locale.ROOT, "%.6g", v);
+    int e = s.indexOf('e');
+    String mantissa = e < 0 ? s : s.substring(0, e);
+    String exponent = e < 0 ? "" : s.substring(e);
+    if (mantissa.contains(".")) {
+      mantissa = mantissa.replaceAll("0+$", "").replaceAll("\\.$", "");
+    }
+    return mantissa + exponent;
   }
 }
