@@ -4,9 +4,10 @@ package dev.soakfield.mesh.msh;
  * Parses a decimal number from ASCII bytes. Plain decimals with at most 15 significant digits and a
  * small power of ten take a fast path that is exact: the digits form an integer below 2^53 and the
  * power of ten is itself exact in a double, so one multiplication or division rounds once,
- * correctly (W. D. Clinger, "How to read floating point numbers accurately", PLDI 1990). Anything
- * else goes to {@link Double#parseDouble}, so every value printed by {@link Double#toString} reads
- * back bit for bit.
+ * correctly (W. D. Clinger, "How to read floating point numbers accurately", PLDI 1990). Up to 19
+ * digits go through {@link EiselLemire}, which is exact too; anything it cannot settle goes to
+ * {@link Double#parseDouble}, so every value printed by {@link Double#toString} reads back bit for
+ * bit.
  */
 final class DecimalParser {
   private static final double[] POW10 = {
@@ -39,7 +40,7 @@ final class DecimalParser {
       if (c >= '0' && c <= '9') {
         digits++;
         if (mantissa != 0 || c != '0') {
-          if (significant < 18) {
+          if (significant < 19) {
             mantissa = mantissa * 10 + (c - '0');
           }
           significant++;
@@ -92,6 +93,12 @@ final class DecimalParser {
     if (significant <= 15 && power >= -22 && power <= 22) {
       double v = power >= 0 ? mantissa * POW10[power] : mantissa / POW10[-power];
       return negative ? -v : v;
+    }
+    if (significant <= 19) {
+      double v = EiselLemire.toDouble(mantissa, power, negative);
+      if (!Double.isNaN(v)) {
+        return v;
+      }
     }
     return Double.parseDouble(
         new String(buf, from, to - from, java.nio.charset.StandardCharsets.ISO_8859_1));

@@ -52,13 +52,11 @@ final class FaceGrouping {
       int[] tets,
       int[] tetGroup,
       double featureAngleDeg,
-      boolean forceWideKeys,
       List<MeshFinding> out) {
     int nodesPerTet = raw.order == 1 ? 4 : 10;
     int nodesPerTri = raw.order == 1 ? 3 : 6;
     int triCount = raw.triCount();
-    FaceRuns runs =
-        FaceRuns.build(tets, nodesPerTet, raw.tris, nodesPerTri, xyz.length / 3, forceWideKeys);
+    FaceRuns runs = FaceRuns.build(tets, nodesPerTet, raw.tris, nodesPerTri, xyz.length / 3);
     int tetFaceCount = runs.tetFaceCount();
 
     int[] triFace = new int[triCount];

@@ -1,14 +1,15 @@
 package dev.soakfield.mesh.topo;
 
 /**
- * All tetrahedron faces and all file triangles, sorted by their sorted corner nodes, and cut into
+ * All tetrahedron faces and all file triangles, grouped by their sorted corner nodes, and cut into
  * runs of items with the same three corners. An item is a tetrahedron face {@code 4 * tet + local
  * face} (below {@link #tetFaceCount()}) or a triangle {@code tetFaceCount + tri}. Within a run the
- * tetrahedron faces come first, in (tet, local face) order, then the triangles in file order,
- * because the sort is stable.
+ * tetrahedron faces come first, in (tet, local face) order, then the triangles in file order.
  *
- * <p>Keys are three node indices packed into one long when they fit in 21 bits each; otherwise two
- * stable passes sort by the last two corners, then by the first one.
+ * <p>Items are bucketed by their smallest corner with one counting pass (a node is the smallest
+ * corner of a few dozen faces at most in any usable mesh), then each bucket is sorted by the other
+ * two corners with insertion sort: two passes over memory instead of a full multi-pass sort, and no
+ * limit on node numbers.
  */
 final class FaceRuns {
   private final int tetFaceCount;
@@ -23,48 +24,61 @@ final class FaceRuns {
     this.runCount = runCount;
   }
 
-  static FaceRuns build(
-      int[] tets, int nodesPerTet, int[] tris, int nodesPerTri, int nodeCount, boolean forceWide) {
+  static FaceRuns build(int[] tets, int nodesPerTet, int[] tris, int nodesPerTri, int nodeCount) {
     int tetFaceCount = tets.length / nodesPerTet * 4;
     int n = tetFaceCount + tris.length / nodesPerTri;
     Corners corners = new Corners(tets, nodesPerTet, tris, nodesPerTri, tetFaceCount);
-    int bits = RadixSort.bitsFor(nodeCount);
-    long[] keys = new long[n];
-    int[] items = new int[n];
+    int[] smallest = new int[n];
+    long[] rest = new long[n];
     int[] abc = new int[3];
-    boolean packed = 3 * bits <= 63 && !forceWide;
+    int[] bucketStart = new int[nodeCount + 1];
     for (int i = 0; i < n; i++) {
-      items[i] = i;
       corners.sorted(i, abc);
-      keys[i] =
-          packed
-              ? ((long) abc[0] << (2 * bits)) | ((long) abc[1] << bits) | abc[2]
-              : ((long) abc[1] << 31) | abc[2];
+      smallest[i] = abc[0];
+      rest[i] = ((long) abc[1] << 32) | abc[2];
+      bucketStart[abc[0] + 1]++;
     }
-    if (packed) {
-      RadixSort.sort(keys, items, 3 * bits);
-    } else {
-      RadixSort.sort(keys, items, 62);
-      for (int i = 0; i < n; i++) {
-        corners.sorted(items[i], abc);
-        keys[i] = abc[0];
-      }
-      RadixSort.sort(keys, items, bits);
+    for (int v = 0; v < nodeCount; v++) {
+      bucketStart[v + 1] += bucketStart[v];
+    }
+    int[] items = new int[n];
+    long[] keys = new long[n]; // rest[] in bucket order, so each bucket sorts in place
+    int[] fill = java.util.Arrays.copyOf(bucketStart, nodeCount);
+    for (int i = 0; i < n; i++) {
+      int p = fill[smallest[i]]++; // ascending item order within each bucket
+      items[p] = i;
+      keys[p] = rest[i];
     }
     int[] runStart = new int[n + 1];
     int runCount = 0;
-    int[] prev = {-1, -1, -1};
-    for (int i = 0; i < n; i++) {
-      corners.sorted(items[i], abc);
-      if (abc[0] != prev[0] || abc[1] != prev[1] || abc[2] != prev[2]) {
-        runStart[runCount++] = i;
-        prev[0] = abc[0];
-        prev[1] = abc[1];
-        prev[2] = abc[2];
+    for (int v = 0; v < nodeCount; v++) {
+      int s = bucketStart[v];
+      int e = bucketStart[v + 1];
+      sortBucket(items, keys, s, e);
+      for (int p = s; p < e; p++) {
+        if (p == s || keys[p] != keys[p - 1]) {
+          runStart[runCount++] = p;
+        }
       }
     }
     runStart[runCount] = n;
     return new FaceRuns(tetFaceCount, items, runStart, runCount);
+  }
+
+  /** Stable insertion sort of items[s..e) and their keys by key (the two larger corners). */
+  private static void sortBucket(int[] items, long[] keys, int s, int e) {
+    for (int p = s + 1; p < e; p++) {
+      int item = items[p];
+      long key = keys[p];
+      int q = p - 1;
+      while (q >= s && keys[q] > key) {
+        items[q + 1] = items[q];
+        keys[q + 1] = keys[q];
+        q--;
+      }
+      items[q + 1] = item;
+      keys[q + 1] = key;
+    }
   }
 
   int tetFaceCount() {

@@ -39,11 +39,6 @@ public final class MeshAssembler {
    * @throws IllegalArgumentException when the raw arrays do not fit together (a reader's defect)
    */
   public static MeshImport assemble(RawMesh raw, AssemblyOptions options) {
-    return assemble(raw, options, false);
-  }
-
-  /** As {@link #assemble(RawMesh, AssemblyOptions)}; {@code forceWideKeys} tests the wide sort. */
-  static MeshImport assemble(RawMesh raw, AssemblyOptions options, boolean forceWideKeys) {
     Objects.requireNonNull(raw, "raw");
     Objects.requireNonNull(options, "options");
     RawInput.check(raw);
@@ -63,8 +58,7 @@ public final class MeshAssembler {
     boolean[] used = MeshChecker.usedNodes(raw.nodeCount(), tets, raw.nodeIds, findings);
     MeshChecker.coincidentNodes(xyz, used, raw.nodeIds, findings);
     FaceGrouping faces =
-        FaceGrouping.build(
-            raw, xyz, tets, tetGroup, options.featureAngleDeg(), forceWideKeys, findings);
+        FaceGrouping.build(raw, xyz, tets, tetGroup, options.featureAngleDeg(), findings);
     MeshQuality quality = MeshChecker.quality(xyz, tets, nodesPerTet, raw.tetIds, findings);
 
     TetMesh mesh =

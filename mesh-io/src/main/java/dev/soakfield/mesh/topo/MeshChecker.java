@@ -181,12 +181,14 @@ final class MeshChecker {
   /** Dihedral extremes and volume-ratio histogram; a warning for sliver tetrahedra. */
   static MeshQuality quality(
       double[] xyz, int[] tets, int nodesPerTet, long[] tetIds, List<MeshFinding> out) {
-    double minAngle = 180.0;
-    double maxAngle = 0.0;
+    // extremes of the cosines: the smallest angle has the largest cosine
+    double maxCos = -1.0;
+    double minCos = 1.0;
+    double sliverCos = Math.cos(Math.toRadians(LOW_DIHEDRAL_DEG));
     double minRatio = 1.0;
     int[] histogram = new int[MeshQuality.BINS];
-    double[] scratch = new double[12];
-    double[] angles = new double[6];
+    double[] scratch = new double[16];
+    double[] cosines = new double[6];
     IdList slivers = new IdList();
     int n = tets.length / nodesPerTet;
     for (int t = 0; t < n; t++) {
@@ -195,29 +197,31 @@ final class MeshChecker {
       int b = tets[base + 1];
       int c = tets[base + 2];
       int d = tets[base + 3];
-      double tetMin;
-      double tetMax;
-      if (TetShape.dihedralAnglesDeg(xyz, a, b, c, d, scratch, angles)) {
-        tetMin = 180.0;
-        tetMax = 0.0;
-        for (double angle : angles) {
-          tetMin = Math.min(tetMin, angle);
-          tetMax = Math.max(tetMax, angle);
+      double tetMaxCos;
+      double tetMinCos;
+      if (TetShape.dihedralCosines(xyz, a, b, c, d, scratch, cosines)) {
+        tetMaxCos = -1.0;
+        tetMinCos = 1.0;
+        for (double cos : cosines) {
+          tetMaxCos = Math.max(tetMaxCos, cos);
+          tetMinCos = Math.min(tetMinCos, cos);
         }
       } else {
-        // A face of zero area: the limits of the flat shape.
-        tetMin = 0.0;
-        tetMax = 180.0;
+        // A face of zero area: the limits of the flat shape, 0 and 180 degrees.
+        tetMaxCos = 1.0;
+        tetMinCos = -1.0;
       }
-      minAngle = Math.min(minAngle, tetMin);
-      maxAngle = Math.max(maxAngle, tetMax);
-      if (tetMin < LOW_DIHEDRAL_DEG) {
+      maxCos = Math.max(maxCos, tetMaxCos);
+      minCos = Math.min(minCos, tetMinCos);
+      if (tetMaxCos > sliverCos) {
         slivers.add(tetIds[t]);
       }
       double ratio = Math.max(0.0, Math.min(1.0, TetShape.volumeRatio(xyz, a, b, c, d)));
       minRatio = Math.min(minRatio, ratio);
       histogram[Math.min(MeshQuality.BINS - 1, (int) (ratio * MeshQuality.BINS))]++;
     }
+    double minAngle = n == 0 ? 180.0 : TetShape.cosineToDegrees(maxCos);
+    double maxAngle = n == 0 ? 0.0 : TetShape.cosineToDegrees(minCos);
     if (!slivers.isEmpty()) {
       out.add(
           MeshFinding.warning(

@@ -93,7 +93,7 @@ public final class MeshGeometry {
   public static double[] dihedralAnglesDeg(TetMesh mesh, int tet) {
     double[] p = tetCorners(mesh, tet);
     double[] angles = new double[6];
-    if (!TetShape.dihedralAnglesDeg(p, 0, 1, 2, 3, new double[12], angles)) {
+    if (!TetShape.dihedralAnglesDeg(p, 0, 1, 2, 3, new double[16], angles)) {
       throw new MeshInputException(
           "mesh",
           "tetrahedron " + tet,

@@ -132,26 +132,47 @@ final class TetShape {
   /**
    * The six dihedral angles in degrees, at edges (0,1), (1,2), (2,0), (3,0), (3,2), (3,1), into
    * {@code out}; independent of the orientation. Returns false when a face has zero area (the
-   * angles are undefined); {@code scratch} holds 12 doubles.
+   * angles are undefined); {@code scratch} holds 16 doubles.
    */
   static boolean dihedralAnglesDeg(
+      double[] xyz, int a, int b, int c, int d, double[] scratch, double[] out) {
+    if (!dihedralCosines(xyz, a, b, c, d, scratch, out)) {
+      return false;
+    }
+    for (int k = 0; k < 6; k++) {
+      out[k] = cosineToDegrees(out[k]);
+    }
+    return true;
+  }
+
+  /** The angle in degrees whose cosine is {@code cos} (clamped to [-1, 1] against round-off). */
+  static double cosineToDegrees(double cos) {
+    return Math.toDegrees(Math.acos(Math.max(-1.0, Math.min(1.0, cos))));
+  }
+
+  /**
+   * Cosines of the six dihedral angles, in the edge order of {@link #dihedralAnglesDeg}: what the
+   * quality scan needs, since the smallest angle has the largest cosine and no arc cosine is taken
+   * per tetrahedron. Returns false when a face has zero area; {@code scratch} holds 16 doubles.
+   */
+  static boolean dihedralCosines(
       double[] xyz, int a, int b, int c, int d, double[] scratch, double[] out) {
     // Area vectors of the faces opposite corners 0..3, all outward for a positive tetrahedron.
     areaVector(xyz, b, c, d, scratch, 0);
     areaVector(xyz, a, d, c, scratch, 3);
     areaVector(xyz, a, b, d, scratch, 6);
     areaVector(xyz, a, c, b, scratch, 9);
-    for (int k = 0; k < 6; k++) {
-      int f = 3 * EDGE_FACES[k][0];
-      int g = 3 * EDGE_FACES[k][1];
-      double lf = Math.sqrt(dot(scratch, f, scratch, f));
-      double lg = Math.sqrt(dot(scratch, g, scratch, g));
-      if (lf == 0.0 || lg == 0.0) {
+    for (int f = 0; f < 4; f++) {
+      scratch[12 + f] = Math.sqrt(dot(scratch, 3 * f, scratch, 3 * f));
+      if (scratch[12 + f] == 0.0) {
         return false;
       }
+    }
+    for (int k = 0; k < 6; k++) {
+      int f = EDGE_FACES[k][0];
+      int g = EDGE_FACES[k][1];
       // The interior angle is the supplement of the angle between the outward normals.
-      double cos = -dot(scratch, f, scratch, g) / (lf * lg);
-      out[k] = Math.toDegrees(Math.acos(Math.max(-1.0, Math.min(1.0, cos))));
+      out[k] = -dot(scratch, 3 * f, scratch, 3 * g) / (scratch[12 + f] * scratch[12 + g]);
     }
     return true;
   }

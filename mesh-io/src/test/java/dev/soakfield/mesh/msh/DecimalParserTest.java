@@ -33,6 +33,34 @@ class DecimalParserTest {
   }
 
   @Test
+  void longDecimalsMatchTheJdkParserAcrossTheExponentRange() {
+    // reference: the JDK's Double.parseDouble, correctly rounded per the Java SE API
+    SplittableRandom rnd = new SplittableRandom(99L);
+    for (int i = 0; i < 200_000; i++) {
+      int digits = 16 + rnd.nextInt(4);
+      StringBuilder sb = new StringBuilder(rnd.nextBoolean() ? "-" : "");
+      sb.append((char) ('1' + rnd.nextInt(9)));
+      sb.append('.');
+      for (int d = 1; d < digits; d++) {
+        sb.append((char) ('0' + rnd.nextInt(10)));
+      }
+      sb.append('e').append(rnd.nextInt(-330, 309));
+      String text = sb.toString();
+      assertBits(Double.parseDouble(text), parse(text));
+    }
+  }
+
+  @Test
+  void halfwayCasesRoundToEven() {
+    // 2^53 + 1 and 2^53 + 3 lie exactly between two doubles (IEEE 754 round half to even)
+    assertBits(9007199254740992.0, parse("9007199254740993"));
+    assertBits(9007199254740996.0, parse("9007199254740995"));
+    assertBits(Double.parseDouble("1.7976931348623157e308"), parse("1.7976931348623157e308"));
+    assertBits(Double.parseDouble("4.9e-324"), parse("4.9e-324"));
+    assertBits(Double.parseDouble("2.2250738585072014e-308"), parse("2.2250738585072014e-308"));
+  }
+
+  @Test
   void plainDecimalsMatchTheJdkParser() {
     String[] samples = {
       "0",

@@ -381,9 +381,34 @@ class MeshAssemblerTest {
     assertEquals(1.0, MeshGeometry.groupVolumes(mesh)[0], 1e-10);
     assertEquals(6, mesh.faceGroups().size());
     assertEquals(1, result.report().findings().size(), result.report().findings().toString());
-    // The wide-key sort (for meshes past 2^21 nodes) must give the very same mesh.
-    MeshImport wide = MeshAssembler.assemble(raw, AssemblyOptions.defaults(), true);
-    assertTrue(mesh.sameAs(wide.mesh()));
+  }
+
+  @Test
+  void nodeNumbersBeyondTwentyOneBitsAreMatched() {
+    // a cube split into six tets whose nodes sit past 2^21 unused nodes: the face matching must
+    // not depend on node numbers fitting a packed key
+    int pad = (1 << 21) + 5;
+    double[] cube = {0, 0, 0, 1, 0, 0, 0, 1, 0, 1, 1, 0, 0, 0, 1, 1, 0, 1, 0, 1, 1, 1, 1, 1};
+    double[] xyz = new double[3 * pad + cube.length];
+    for (int i = 0; i < pad; i++) {
+      xyz[3 * i] = -10 - i; // far away and distinct
+    }
+    System.arraycopy(cube, 0, xyz, 3 * pad, cube.length);
+    int[] kuhn = {0, 1, 3, 7, 0, 3, 2, 7, 0, 2, 6, 7, 0, 6, 4, 7, 0, 4, 5, 7, 0, 5, 1, 7};
+    int[] tets = new int[kuhn.length];
+    for (int i = 0; i < kuhn.length; i++) {
+      tets[i] = kuhn[i] + pad;
+    }
+    MeshImport result =
+        MeshAssembler.assemble(TestMeshes.tets(xyz, tets), AssemblyOptions.defaults());
+    // exact geometry: a unit cube has 12 exterior triangles (2 per side) and area 6
+    assertEquals(12, result.mesh().faceCount());
+    double total = 0;
+    for (double a : MeshGeometry.groupAreas(result.mesh())) {
+      total += a;
+    }
+    assertEquals(6.0, total, 1e-12);
+    assertEquals(6, result.mesh().faceGroups().size()); // six flat sides at 30 degrees
   }
 
   @Test
