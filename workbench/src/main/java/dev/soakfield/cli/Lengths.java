@@ -47,18 +47,7 @@ final class Lengths {
 
   /** Exactly {@code count} comma-separated positive lengths in metres. */
   static double[] parseList(String text, int count, String option) {
-    String[] parts = text.split(",", -1);
-    if (parts.length != count) {
-      throw new UserInputException(
-          option
-              + ": found "
-              + parts.length
-              + " value(s) in '"
-              + text
-              + "', expected "
-              + count
-              + " separated by commas");
-    }
+    String[] parts = split(text, count, option, "");
     double[] out = new double[count];
     for (int i = 0; i < count; i++) {
       out[i] = parse(parts[i], option);
@@ -68,6 +57,15 @@ final class Lengths {
 
   /** Exactly {@code count} comma-separated positive integers. */
   static int[] parseCounts(String text, int count, String option) {
+    String[] parts = split(text, count, option, " whole numbers");
+    int[] out = new int[count];
+    for (int i = 0; i < count; i++) {
+      out[i] = parseCount(parts[i], option);
+    }
+    return out;
+  }
+
+  private static String[] split(String text, int count, String option, String what) {
     String[] parts = text.split(",", -1);
     if (parts.length != count) {
       throw new UserInputException(
@@ -78,13 +76,10 @@ final class Lengths {
               + text
               + "', expected "
               + count
-              + " whole numbers separated by commas");
+              + what
+              + " separated by commas");
     }
-    int[] out = new int[count];
-    for (int i = 0; i < count; i++) {
-      out[i] = parseCount(parts[i], option);
-    }
-    return out;
+    return parts;
   }
 
   /** One positive integer. */

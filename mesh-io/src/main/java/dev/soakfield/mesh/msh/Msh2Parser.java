@@ -8,61 +8,33 @@ import java.util.Arrays;
  * Reads the sections of an MSH 2.2 file (ASCII or binary) after $MeshFormat. Each element carries
  * its own tags: the first is its physical group, the second its elementary entity.
  */
-final class Msh2Parser {
-  private final MshCursor c;
-  private final RawMesh raw;
-  private final NodeStore nodes = new NodeStore();
-  private final ElementStore elements = new ElementStore();
+final class Msh2Parser extends MshSectionParser {
   private int[] tetEntities = new int[0];
   private int[] triEntities = new int[0];
   private int firstTetWithoutPhysical = -1;
   private int firstWithoutAnyTag = -1;
-  private boolean elementsRead;
 
   Msh2Parser(MshCursor c, RawMesh raw) {
-    this.c = c;
-    this.raw = raw;
+    super(c, raw);
   }
 
-  void parse() {
-    for (String name = c.nextSectionName(); name != null; name = c.nextSectionName()) {
-      int at = c.headerAt;
-      switch (name) {
-        case "PhysicalNames" -> PhysicalNames.read(c, raw);
-        case "Nodes" -> {
-          if (nodes.isRead()) {
-            throw c.error(at, "a second $Nodes section", "one $Nodes section");
-          }
-          readNodes();
-          c.expectEnd("Nodes");
-          nodes.buildIndex(c);
-        }
-        case "Elements" -> {
-          if (!nodes.isRead()) {
-            throw c.error(at, "$Elements before $Nodes", "$Nodes first");
-          }
-          if (elementsRead) {
-            throw c.error(at, "a second $Elements section", "one $Elements section");
-          }
-          if (c.isBinary()) {
-            readElementsBinary();
-          } else {
-            readElementsAscii();
-          }
-          c.expectEnd("Elements");
-          elementsRead = true;
-        }
-        case "MeshFormat" -> throw c.error(at, "a second $MeshFormat", "one $MeshFormat");
-        default -> c.skipSection(name, at);
-      }
+  @Override
+  void readElements() {
+    if (c.isBinary()) {
+      readElementsBinary();
+    } else {
+      readElementsAscii();
     }
-    MshSections.requireNodesAndElements(c, nodes.isRead(), elementsRead);
+  }
+
+  @Override
+  void resolveGroups() {
     GroupResolver.resolve22(
         c, raw, elements, tetEntities, triEntities, firstTetWithoutPhysical, firstWithoutAnyTag);
-    MshSections.fill(raw, nodes, elements);
   }
 
-  private void readNodes() {
+  @Override
+  void readNodes() {
     boolean binary = c.isBinary();
     // ASCII `1 0 0 0` and a line break; binary int id and three doubles
     long count = c.nextCount("number of nodes", binary ? 28 : 8);

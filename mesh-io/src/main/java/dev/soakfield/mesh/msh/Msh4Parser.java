@@ -10,65 +10,47 @@ import java.util.List;
  * the entities that element blocks name, resolved once every section is in, so $Entities and
  * $PhysicalNames may stand anywhere; $Nodes must come before $Elements.
  */
-final class Msh4Parser {
-  private final MshCursor c;
-  private final RawMesh raw;
-  private final NodeStore nodes = new NodeStore();
-  private final ElementStore elements = new ElementStore();
+final class Msh4Parser extends MshSectionParser {
   private final List<ElementBlock> blocks = new ArrayList<>();
   private EntityTable entities;
-  private boolean elementsRead;
 
   Msh4Parser(MshCursor c, RawMesh raw) {
-    this.c = c;
-    this.raw = raw;
+    super(c, raw);
   }
 
-  void parse() {
-    for (String name = c.nextSectionName(); name != null; name = c.nextSectionName()) {
-      int at = c.headerAt;
-      switch (name) {
-        case "PhysicalNames" -> PhysicalNames.read(c, raw);
-        case "Entities" -> {
-          if (entities != null) {
-            throw c.error(at, "a second $Entities section", "one $Entities section");
-          }
-          entities = EntityTable.read(c);
-        }
-        case "Nodes" -> {
-          if (nodes.isRead()) {
-            throw c.error(at, "a second $Nodes section", "one $Nodes section");
-          }
-          if (c.isBinary()) {
-            readNodesBinary();
-          } else {
-            readNodesAscii();
-          }
-          c.expectEnd("Nodes");
-          nodes.buildIndex(c);
-        }
-        case "Elements" -> {
-          if (!nodes.isRead()) {
-            throw c.error(at, "$Elements before $Nodes", "$Nodes first");
-          }
-          if (elementsRead) {
-            throw c.error(at, "a second $Elements section", "one $Elements section");
-          }
-          if (c.isBinary()) {
-            readElementsBinary();
-          } else {
-            readElementsAscii();
-          }
-          c.expectEnd("Elements");
-          elementsRead = true;
-        }
-        case "MeshFormat" -> throw c.error(at, "a second $MeshFormat", "one $MeshFormat");
-        default -> c.skipSection(name, at);
-      }
+  @Override
+  boolean readOwnSection(String name, int at) {
+    if (!name.equals("Entities")) {
+      return false;
     }
-    MshSections.requireNodesAndElements(c, nodes.isRead(), elementsRead);
+    if (entities != null) {
+      throw c.error(at, "a second $Entities section", "one $Entities section");
+    }
+    entities = EntityTable.read(c);
+    return true;
+  }
+
+  @Override
+  void readNodes() {
+    if (c.isBinary()) {
+      readNodesBinary();
+    } else {
+      readNodesAscii();
+    }
+  }
+
+  @Override
+  void readElements() {
+    if (c.isBinary()) {
+      readElementsBinary();
+    } else {
+      readElementsAscii();
+    }
+  }
+
+  @Override
+  void resolveGroups() {
     GroupResolver.resolve41(c, raw, elements, blocks, entities);
-    MshSections.fill(raw, nodes, elements);
   }
 
   // ---- nodes -------------------------------------------------------------------------------
