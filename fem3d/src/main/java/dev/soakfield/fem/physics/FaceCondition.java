@@ -1,0 +1,36 @@
+package dev.soakfield.fem.physics;
+
+import java.util.Objects;
+
+/**
+ * The condition on one face group.
+ *
+ * @param group face group index in the mesh
+ * @param name face group name
+ * @param kind the partition
+ * @param value concentration (CONCENTRATION, EXCHANGE: c_env) or inward flux (FLUX); unused for SEALED
+ * @param coefficient surface transfer coefficient h in m/s (EXCHANGE only)
+ * @param faces the mesh's face indices of the group
+ * @param solubility solubility of the material next to the group (converts c to the potential)
+ */
+public record FaceCondition(
+    int group,
+    String name,
+    FaceKind kind,
+    TimeFunction value,
+    TimeFunction coefficient,
+    int[] faces,
+    double solubility) {
+  public FaceCondition {
+    Objects.requireNonNull(name, "name");
+    Objects.requireNonNull(kind, "kind");
+    Objects.requireNonNull(value, "value");
+    Objects.requireNonNull(coefficient, "coefficient");
+    faces = faces.clone();
+  }
+
+  @Override
+  public int[] faces() {
+    return faces.clone();
+  }
+}

@@ -1,0 +1,98 @@
+package dev.soakfield.fem.post;
+
+import dev.soakfield.fem.assembly.SystemAssembler;
+import dev.soakfield.mesh.TetMesh;
+
+/**
+ * Per volume group: the amount ∫ c dV and the largest nodal c (in the group's own material), and
+ * the time the group's largest c first reached a threshold, interpolated within the step.
+ */
+public final class GroupMonitor {
+  private final SystemAssembler assembler;
+  private final double[] solubilityPerTet;
+  private final double[] groupSolubility;
+  private final int[][] groupNodes;
+  private final double threshold;
+  private final double[] firstTime;
+  private double[] previousMax;
+
+  /**
+   * @param threshold threshold concentration, or NaN for none
+   */
+  public GroupMonitor(
+      SystemAssembler assembler, double[] solubilityPerTet, double threshold, double[] phi0) {
+    this.assembler = assembler;
+    this.solubilityPerTet = solubilityPerTet.clone();
+    TetMesh mesh = assembler.space().mesh();
+    int groups = mesh.volumeGroups().size();
+    groupSolubility = new double[groups];
+    boolean[][] member = new boolean[groups][mesh.nodeCount()];
+    int per = mesh.nodesPerTet();
+    for (int t = 0; t < mesh.tetCount(); t++) {
+      int g = mesh.tetGroup(t);
+      groupSolubility[g] = solubilityPerTet[t];
+      for (int k = 0; k < per; k++) {
+        member[g][mesh.tetNode(t, k)] = true;
+      }
+    }
+    groupNodes = new int[groups][];
+    for (int g = 0; g < groups; g++) {
+      int count = 0;
+      for (boolean b : member[g]) {
+        count += b ? 1 : 0;
+      }
+      int[] nodes = new int[count];
+      int p = 0;
+      for (int v = 0; v < member[g].length; v++) {
+        if (member[g][v]) {
+          nodes[p++] = v;
+        }
+      }
+      groupNodes[g] = nodes;
+    }
+    this.threshold = threshold;
+    firstTime = new double[groups];
+    java.util.Arrays.fill(firstTime, -1);
+    previousMax = maxima(phi0);
+    for (int g = 0; g < groups; g++) {
+      if (previousMax[g] >= threshold) {
+        firstTime[g] = 0;
+      }
+    }
+  }
+
+  /** ∫ c dV per volume group. */
+  public double[] amounts(double[] phi) {
+    return assembler.integratePerGroup(phi, solubilityPerTet);
+  }
+
+  /** Largest nodal c per volume group. */
+  public double[] maxima(double[] phi) {
+    double[] m = new double[groupNodes.length];
+    for (int g = 0; g < m.length; g++) {
+      double best = Double.NEGATIVE_INFINITY;
+      for (int v : groupNodes[g]) {
+        best = Math.max(best, phi[v]);
+      }
+      m[g] = groupSolubility[g] * best;
+    }
+    return m;
+  }
+
+  /** Records the step ending at t; returns the maxima at t. */
+  public double[] step(double t, double dt, double[] phi) {
+    double[] max = maxima(phi);
+    for (int g = 0; g < max.length; g++) {
+      if (firstTime[g] < 0 && max[g] >= threshold) {
+        firstTime[g] = ThresholdClock.crossing(t - dt, previousMax[g], t, max[g], threshold);
+      }
+    }
+    previousMax = max;
+    return max;
+  }
+
+  /** Per group: when its largest c first reached the threshold, -1 where never (a copy). */
+  public double[] firstTimes() {
+    return firstTime.clone();
+  }
+}

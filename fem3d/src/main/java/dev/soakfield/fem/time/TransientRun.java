@@ -1,0 +1,158 @@
+package dev.soakfield.fem.time;
+
+import dev.soakfield.fem.solve.SolverStalledException;
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.TreeSet;
+
+/**
+ * Advances a {@link ThetaStepper} from t = 0 to the end time. Steps land exactly on output times
+ * and on every breakpoint of the boundary tables. Adaptive steps estimate the local error of each
+ * step from the difference between the solution and its linear extrapolation from the two previous
+ * states, scaled by dt / (dt + dt_prev) (the usual estimate for backward Euler, e.g. Gresho & Sani,
+ * Incompressible Flow and the Finite Element Method, 1998, §3.16); a step above tolerance is
+ * retried shorter. Step lengths move on a ladder of powers of two of the first step, so the system
+ * matrix and its preconditioner are reused for runs of equal steps.
+ */
+public final class TransientRun {
+  private static final double GROWTH_LIMIT = 4.0;
+  private static final double SHRINK_LIMIT = 0.25;
+
+  private TransientRun() {}
+
+  public static RunTotals run(
+      ThetaStepper stepper, double[] phiStart, TimeSettings s, StepListener listener) {
+    double end = s.end();
+    TreeSet<Double> targets = new TreeSet<>();
+    for (double t : s.outputs()) {
+      if (t > 0 && t <= end) {
+        targets.add(t);
+      }
+    }
+    TreeSet<Double> kinks = new TreeSet<>();
+    for (double t : stepper.breakpoints()) {
+      if (t > 0 && t < end) {
+        targets.add(t);
+        kinks.add(t);
+      }
+    }
+    targets.add(end);
+    double[] outputs = s.outputs();
+    Arrays.sort(outputs);
+
+    double[] phi = phiStart.clone();
+    stepper.applyPrescribed(phi, 0.0);
+    double scale = maxAbs(phi);
+    double[] previous = null;
+    double previousDt = 0;
+    double t = 0;
+    double dt = s.adaptive() ? Math.min(s.initialStep(), s.maxStep()) : s.fixedStep();
+    double ladderBase = dt;
+    int steps = 0;
+    int rejected = 0;
+    int sinceRestart = 0;
+    long iterations = 0;
+    double minStep = end * 1e-14;
+    while (t < end) {
+      double target = targets.ceiling(t + minStep);
+      double tryDt = Math.min(dt, target - t);
+      if (target - t - tryDt < 0.25 * tryDt) {
+        tryDt = target - t; // do not leave a sliver before the target
+      }
+      boolean crank = s.crankNicolson() && sinceRestart >= TimeSettings.START_STEPS;
+      StepOutcome out;
+      try {
+        out = stepper.step(phi, t, tryDt, crank ? 0.5 : 1.0);
+      } catch (SolverStalledException e) {
+        throw new RunFailedException(
+            t,
+            String.format(
+                Locale.ROOT,
+                "the linear solver did not converge in the step from t = %.6g s to %.6g s: %s;"
+                    + " try shorter steps (a smaller \"tolerance\" or \"step\") or check the"
+                    + " material data for extreme values",
+                t,
+                t + tryDt,
+                e.getMessage()),
+            e);
+      }
+      iterations += out.iterations();
+      double[] next = out.phi();
+      if (!allFinite(next)) {
+        throw new RunFailedException(
+            t, "the solution became non-finite after t = " + t + " s; no results were kept", null);
+      }
+      double error = 0;
+      if (s.adaptive() && previous != null) {
+        scale = Math.max(scale, maxAbs(next));
+        error = localError(previous, previousDt, phi, next, tryDt) / Math.max(scale, 1e-300);
+        if (error > s.tolerance() && tryDt > minStep) {
+          rejected++;
+          dt = ladder(ladderBase, tryDt * Math.max(SHRINK_LIMIT, 0.9 * Math.sqrt(s.tolerance() / error)));
+          if (dt < minStep) {
+            throw new RunFailedException(
+                t,
+                "the time step fell below " + minStep + " s at t = " + t + " s; the tolerance "
+                    + s.tolerance() + " cannot be met",
+                null);
+          }
+          continue;
+        }
+      }
+      double tNew = (target - (t + tryDt)) <= minStep ? target : t + tryDt;
+      steps++;
+      sinceRestart++;
+      boolean isOutput = Arrays.binarySearch(outputs, tNew) >= 0 || tNew == end;
+      listener.accepted(tNew, tryDt, out, isOutput);
+      previous = phi;
+      previousDt = tryDt;
+      phi = next;
+      t = tNew;
+      if (kinks.contains(t)) {
+        previous = null; // the extrapolation does not hold across a kink of the boundary data
+      }
+      if (s.adaptive()) {
+        double grow =
+            error == 0 ? 2.0 : Math.min(GROWTH_LIMIT, Math.max(SHRINK_LIMIT, 0.9 * Math.sqrt(s.tolerance() / error)));
+        if (tryDt >= dt * 0.999) {
+          dt = ladder(ladderBase, Math.min(s.maxStep(), dt * grow));
+        }
+      }
+    }
+    return new RunTotals(steps, rejected, iterations, phi);
+  }
+
+  /** The largest step of the ladder base·2^k not above dt. */
+  private static double ladder(double base, double dt) {
+    double k = Math.floor(Math.log(dt / base) / Math.log(2) + 1e-9);
+    return base * Math.pow(2, k);
+  }
+
+  /** Max-norm of φ₁ − extrapolation(φ₋₁, φ₀), times dt / (dt + dt_prev). */
+  static double localError(double[] prev, double prevDt, double[] cur, double[] next, double dt) {
+    double r = dt / prevDt;
+    double max = 0;
+    for (int i = 0; i < next.length; i++) {
+      double predicted = cur[i] + r * (cur[i] - prev[i]);
+      max = Math.max(max, Math.abs(next[i] - predicted));
+    }
+    return max * dt / (dt + prevDt);
+  }
+
+  private static double maxAbs(double[] a) {
+    double m = 0;
+    for (double v : a) {
+      m = Math.max(m, Math.abs(v));
+    }
+    return m;
+  }
+
+  private static boolean allFinite(double[] a) {
+    for (double v : a) {
+      if (!Double.isFinite(v)) {
+        return false;
+      }
+    }
+    return true;
+  }
+}
