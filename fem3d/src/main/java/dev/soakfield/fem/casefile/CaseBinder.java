@@ -163,7 +163,7 @@ final class CaseBinder {
         ok = false;
       }
     }
-    if (values.isEmpty()) {
+    if (obj.get().members().isEmpty() && materials.isEmpty()) {
       fields.problems().found(node, "initial", expected);
       ok = false;
     }

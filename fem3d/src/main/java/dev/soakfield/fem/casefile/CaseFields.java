@@ -37,6 +37,7 @@ final class CaseFields {
     for (CaseNode.Member m : obj.members().values()) {
       if (!allowed.contains(m.key())) {
         Optional<String> guess = NameSuggestion.likely(m.key(), allowed);
+        guess.ifPresent(g -> problems.suggested(CasePaths.child(path, g)));
         String message =
             guess.isPresent()
                 ? "unknown key; did you mean '" + guess.get() + "'?"
@@ -56,7 +57,7 @@ final class CaseFields {
   Optional<CaseNode> required(CaseNode.Obj obj, String path, String key, String expected) {
     CaseNode.Member m = obj.members().get(key);
     if (m == null) {
-      problems.add(obj, CasePaths.child(path, key), "missing; expected " + expected);
+      problems.missing(obj, CasePaths.child(path, key), expected);
       return Optional.empty();
     }
     return Optional.of(m.value());

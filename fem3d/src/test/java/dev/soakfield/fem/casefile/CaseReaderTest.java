@@ -282,6 +282,21 @@ class CaseReaderTest {
     assertTrue(trailing.message().startsWith("malformed JSON"));
   }
 
+  @Test
+  void numbersBeyondDoubleRangeAreNotTakenAsInfinity() throws IOException {
+    // IEEE 754 double: the largest finite value is about 1.8e308 (common practice)
+    Path file =
+        write(
+            "huge.json",
+            """
+            { "mesh": "m.msh", "materials": { "b": { "diffusivity": 1e400 } },
+              "time": { "end": 1 } }
+            """);
+    Problem p = single(assertThrows(CaseInputException.class, () -> CaseReader.read(file)));
+    assertEquals("materials.b.diffusivity", p.path());
+    assertTrue(p.message().startsWith("found 1e400, expected a positive number"), p.message());
+  }
+
   private static SourcePlace place(Problem p) {
     return new SourcePlace(p.line(), p.column());
   }
