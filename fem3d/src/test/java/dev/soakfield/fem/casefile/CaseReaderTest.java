@@ -297,6 +297,52 @@ class CaseReaderTest {
     assertTrue(p.message().startsWith("found 1e400, expected a positive number"), p.message());
   }
 
+  @Test
+  void adaptiveStepLimitsAreReadAndChecked() throws IOException {
+    Path good =
+        write(
+            "limits.json",
+            """
+            { "mesh": "m.msh", "elements": "linear", "materials": { "b": { "diffusivity": 1 } },
+              "time": { "end": 100, "tolerance": 1e-4, "initial_step": 0.5, "max_step": 20 } }
+            """);
+    CaseSpec spec = CaseReader.read(good);
+    assertEquals(
+        new StepControl.Adaptive(1e-4, OptionalDouble.of(0.5), OptionalDouble.of(20)),
+        spec.time().steps());
+    assertEquals(ElementChoice.LINEAR, spec.elements());
+    assertEquals(1, spec.elements().orderFor(2));
+    assertEquals(2, ElementChoice.AS_MESHED.orderFor(2));
+    assertEquals(2, ElementChoice.QUADRATIC.orderFor(1));
+
+    Path bad =
+        write(
+            "limits-bad.json",
+            """
+            { "mesh": "m.msh", "materials": { "b": { "diffusivity": 1 } },
+              "time": { "end": 100, "initial_step": 50,
+                        "max_step": 20 },
+              "faces": { "f": { "kind": "exchange", "value": 1 } } }
+            """);
+    List<Problem> p = assertThrows(CaseInputException.class, () -> CaseReader.read(bad)).problems();
+    assertEquals(2, p.size());
+    assertEquals("time.initial_step", p.get(0).path());
+    assertEquals("found 50, expected at most max_step (20)", p.get(0).message());
+    assertEquals("faces.f.coefficient", p.get(1).path());
+    assertEquals(4, p.get(1).line());
+
+    Path fixed =
+        write(
+            "limits-fixed.json",
+            """
+            { "mesh": "m.msh", "materials": { "b": { "diffusivity": 1 } },
+              "time": { "end": 100, "step": 5, "max_step": 20 } }
+            """);
+    Problem only = single(assertThrows(CaseInputException.class, () -> CaseReader.read(fixed)));
+    assertEquals("time.max_step", only.path());
+    assertTrue(only.message().startsWith("found with fixed steps"), only.message());
+  }
+
   private static SourcePlace place(Problem p) {
     return new SourcePlace(p.line(), p.column());
   }
