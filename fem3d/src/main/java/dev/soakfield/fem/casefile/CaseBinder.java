@@ -1,0 +1,189 @@
+package dev.soakfield.fem.casefile;
+
+import java.nio.file.InvalidPathException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+
+/** Turns the tree of a case file into a {@link CaseSpec}, collecting every independent problem. */
+final class CaseBinder {
+  private static final Set<String> TOP_KEYS =
+      Set.of("mesh", "elements", "materials", "faces", "initial", "time", "probes", "threshold");
+
+  private final CaseFields fields;
+  private final Path caseFile;
+
+  private CaseBinder(ProblemList problems, Path caseFile) {
+    this.fields = new CaseFields(problems);
+    this.caseFile = caseFile;
+  }
+
+  static CaseSpec bind(CaseNode root, Path caseFile, String source) {
+    ProblemList problems = new ProblemList(source);
+    CaseBinder binder = new CaseBinder(problems, caseFile);
+    Optional<CaseSpec> spec = binder.top(root);
+    problems.throwIfAny();
+    return spec.orElseThrow(() -> new IllegalStateException("no case and no problem reported"));
+  }
+
+  private Optional<CaseSpec> top(CaseNode root) {
+    Optional<CaseNode.Obj> found = fields.object(root, "", "a JSON object (the case)");
+    if (found.isEmpty()) {
+      return Optional.empty();
+    }
+    CaseNode.Obj obj = found.get();
+    fields.onlyKeys(obj, "", TOP_KEYS);
+    Optional<Path> mesh =
+        fields.required(obj, "", "mesh", "the mesh file name").flatMap(this::mesh);
+    Optional<ElementChoice> elements =
+        CaseFields.optional(obj, "elements")
+            .map(
+                n ->
+                    fields.word(
+                        n,
+                        "elements",
+                        new ElementChoice[] {ElementChoice.LINEAR, ElementChoice.QUADRATIC},
+                        ElementChoice::word))
+            .orElse(Optional.of(ElementChoice.AS_MESHED));
+    Optional<Map<String, MaterialSpec>> materials =
+        fields
+            .required(obj, "", "materials", "an object: volume group → material")
+            .flatMap(n -> new MaterialBinder(fields).bind(n, "materials"));
+    Optional<Map<String, FaceSpec>> faces =
+        CaseFields.optional(obj, "faces")
+            .map(n -> new FaceBinder(fields).bind(n, "faces"))
+            .orElse(Optional.of(Map.of()));
+    Optional<InitialSpec> initial =
+        CaseFields.optional(obj, "initial")
+            .map(n -> initial(n, materials))
+            .orElse(Optional.of(InitialSpec.uniform(0)));
+    Optional<TimeSpec> time =
+        fields
+            .required(obj, "", "time", "an object with end")
+            .flatMap(n -> new TimeBinder(fields).bind(n, "time"));
+    Optional<List<ProbeSpec>> probes =
+        CaseFields.optional(obj, "probes").map(this::probes).orElse(Optional.of(List.of()));
+    Optional<OptionalDouble> threshold = Optional.of(OptionalDouble.empty());
+    Optional<CaseNode> thresholdNode = CaseFields.optional(obj, "threshold");
+    if (thresholdNode.isPresent()) {
+      OptionalDouble t =
+          fields.positive(thresholdNode.get(), "threshold", "a positive concentration");
+      threshold = t.isPresent() ? Optional.of(t) : Optional.empty();
+    }
+    if (mesh.isEmpty()
+        || elements.isEmpty()
+        || materials.isEmpty()
+        || faces.isEmpty()
+        || initial.isEmpty()
+        || time.isEmpty()
+        || probes.isEmpty()
+        || threshold.isEmpty()) {
+      return Optional.empty();
+    }
+    return Optional.of(
+        new CaseSpec(
+            caseFile,
+            mesh.get(),
+            elements.get(),
+            materials.get(),
+            faces.get(),
+            initial.get(),
+            time.get(),
+            probes.get(),
+            threshold.get(),
+            PlaceIndex.of(root)));
+  }
+
+  private Optional<Path> mesh(CaseNode node) {
+    Optional<String> name = fields.text(node, "mesh", "the mesh file name (a string)");
+    if (name.isEmpty()) {
+      return Optional.empty();
+    }
+    try {
+      Path folder = caseFile.toAbsolutePath().getParent();
+      Path given = Path.of(name.get());
+      return Optional.of(folder == null ? given : folder.resolve(given).normalize());
+    } catch (InvalidPathException e) {
+      fields.problems().found(node, "mesh", "a valid file path (" + e.getReason() + ")");
+      return Optional.empty();
+    }
+  }
+
+  private Optional<InitialSpec> initial(
+      CaseNode node, Optional<Map<String, MaterialSpec>> materials) {
+    String expected = "a concentration ≥ 0, or an object: volume group → concentration";
+    if (node instanceof CaseNode.Num) {
+      OptionalDouble c = fields.nonNegative(node, "initial", expected);
+      return c.isPresent() ? Optional.of(InitialSpec.uniform(c.getAsDouble())) : Optional.empty();
+    }
+    Optional<CaseNode.Obj> obj = fields.object(node, "initial", expected);
+    if (obj.isEmpty()) {
+      return Optional.empty();
+    }
+    Map<String, Double> values = new LinkedHashMap<>();
+    boolean ok = true;
+    for (CaseNode.Member m : obj.get().members().values()) {
+      String path = CasePaths.child("initial", m.key());
+      OptionalDouble c = fields.nonNegative(m.value(), path, "a concentration ≥ 0");
+      ok &= c.isPresent();
+      c.ifPresent(v -> values.put(m.key(), v));
+      if (materials.isPresent() && !materials.get().containsKey(m.key())) {
+        fields
+            .problems()
+            .add(
+                m.keyLine(),
+                m.keyColumn(),
+                path,
+                "found a volume group with no material, expected one of "
+                    + String.join(", ", materials.get().keySet()));
+        ok = false;
+      }
+    }
+    if (materials.isPresent()) {
+      List<String> missing = new ArrayList<>();
+      for (String group : materials.get().keySet()) {
+        if (!obj.get().members().containsKey(group)) {
+          missing.add(group);
+        }
+      }
+      if (!missing.isEmpty()) {
+        fields
+            .problems()
+            .add(
+                node,
+                "initial",
+                "found no value for volume group(s) "
+                    + String.join(", ", missing)
+                    + ", expected a value for every material");
+        ok = false;
+      }
+    }
+    if (obj.get().members().isEmpty() && materials.isEmpty()) {
+      fields.problems().found(node, "initial", expected);
+      ok = false;
+    }
+    return ok ? Optional.of(new InitialSpec(OptionalDouble.empty(), values)) : Optional.empty();
+  }
+
+  private Optional<List<ProbeSpec>> probes(CaseNode node) {
+    Optional<CaseNode.Obj> obj = fields.object(node, "probes", "an object: name → [x, y, z]");
+    if (obj.isEmpty()) {
+      return Optional.empty();
+    }
+    List<ProbeSpec> out = new ArrayList<>();
+    boolean ok = true;
+    for (CaseNode.Member m : obj.get().members().values()) {
+      Optional<double[]> p =
+          fields.numbers(
+              m.value(), CasePaths.child("probes", m.key()), 3, "a point [x, y, z] in metres");
+      ok &= p.isPresent();
+      p.ifPresent(xyz -> out.add(new ProbeSpec(m.key(), xyz[0], xyz[1], xyz[2])));
+    }
+    return ok ? Optional.of(out) : Optional.empty();
+  }
+}

@@ -1,0 +1,28 @@
+package dev.soakfield.fem.casefile;
+
+import java.nio.file.Path;
+import java.util.Objects;
+
+/**
+ * Reads a case file: JSON with {@code //} and {@code /* *}{@code /} comments. Every mistake is a
+ * {@link CaseInputException} naming the file, line, column and key path; independent mistakes are
+ * reported together.
+ */
+public final class CaseReader {
+  private CaseReader() {}
+
+  /**
+   * Reads and checks a case file on its own (see {@link CaseChecks#againstMesh} for the checks that
+   * need the mesh).
+   *
+   * @param caseFile the case file; the mesh path inside it is resolved against its folder
+   * @throws CaseInputException when the file is missing, malformed or holds a wrong value
+   */
+  public static CaseSpec read(Path caseFile) {
+    Objects.requireNonNull(caseFile, "caseFile");
+    Path name = caseFile.getFileName();
+    String source = name == null ? caseFile.toString() : name.toString();
+    CaseNode root = CaseTreeReader.read(caseFile, source);
+    return CaseBinder.bind(root, caseFile, source);
+  }
+}

@@ -1,0 +1,58 @@
+package dev.soakfield.fem.casefile;
+
+import java.nio.file.Path;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.OptionalDouble;
+
+/**
+ * A case as read from its file: what to run, not yet checked against the mesh (see {@link
+ * CaseChecks#againstMesh}). Immutable; maps keep the order of the file.
+ *
+ * @param caseFile the case file as given to {@link CaseReader#read}
+ * @param mesh the mesh file, resolved against the case file's folder
+ * @param elements element order to run with
+ * @param materials by volume group name
+ * @param faces boundary conditions by face group name (groups not named here are sealed)
+ * @param initial initial concentration
+ * @param time time control
+ * @param probes points to record
+ * @param threshold the concentration whose first arrival is reported, when given
+ * @param places where each key path's value stands in the file
+ */
+public record CaseSpec(
+    Path caseFile,
+    Path mesh,
+    ElementChoice elements,
+    Map<String, MaterialSpec> materials,
+    Map<String, FaceSpec> faces,
+    InitialSpec initial,
+    TimeSpec time,
+    List<ProbeSpec> probes,
+    OptionalDouble threshold,
+    Map<String, SourcePlace> places) {
+  public CaseSpec {
+    Objects.requireNonNull(caseFile, "caseFile");
+    Objects.requireNonNull(mesh, "mesh");
+    Objects.requireNonNull(elements, "elements");
+    materials = ordered(materials);
+    faces = ordered(faces);
+    Objects.requireNonNull(initial, "initial");
+    Objects.requireNonNull(time, "time");
+    probes = List.copyOf(probes);
+    Objects.requireNonNull(threshold, "threshold");
+    places = ordered(places);
+  }
+
+  private static <V> Map<String, V> ordered(Map<String, V> map) {
+    return Collections.unmodifiableMap(new LinkedHashMap<>(map));
+  }
+
+  /** Where the value at {@code path} stands, or line 0 when the file does not hold the path. */
+  public SourcePlace placeOf(String path) {
+    return places.getOrDefault(path, new SourcePlace(0, 0));
+  }
+}

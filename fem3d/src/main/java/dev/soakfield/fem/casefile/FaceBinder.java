@@ -1,0 +1,85 @@
+package dev.soakfield.fem.casefile;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+
+/** Reads {@code faces}: the boundary condition per face group. */
+final class FaceBinder {
+  private final CaseFields fields;
+
+  FaceBinder(CaseFields fields) {
+    this.fields = fields;
+  }
+
+  /** Face specs by group; empty when some entry is unusable (problems recorded). */
+  Optional<Map<String, FaceSpec>> bind(CaseNode node, String path) {
+    Optional<CaseNode.Obj> obj = fields.object(node, path, "an object: face group → condition");
+    if (obj.isEmpty()) {
+      return Optional.empty();
+    }
+    Map<String, FaceSpec> out = new LinkedHashMap<>();
+    boolean ok = true;
+    for (CaseNode.Member m : obj.get().members().values()) {
+      Optional<FaceSpec> spec = face(m.key(), m.value(), CasePaths.child(path, m.key()));
+      ok &= spec.isPresent();
+      spec.ifPresent(s -> out.put(m.key(), s));
+    }
+    return ok ? Optional.of(out) : Optional.empty();
+  }
+
+  private Optional<FaceSpec> face(String group, CaseNode node, String path) {
+    Optional<CaseNode.Obj> obj = fields.object(node, path, "an object with kind");
+    if (obj.isEmpty()) {
+      return Optional.empty();
+    }
+    String kindPath = CasePaths.child(path, "kind");
+    Optional<FaceKind> kind =
+        fields
+            .required(obj.get(), path, "kind", "concentration, flux, exchange or sealed")
+            .flatMap(n -> fields.word(n, kindPath, FaceKind.values(), FaceKind::word));
+    if (kind.isEmpty()) {
+      fields.onlyKeys(obj.get(), path, Set.of("kind", "value", "coefficient"));
+      return Optional.empty();
+    }
+    return switch (kind.get()) {
+      case SEALED -> {
+        fields.onlyKeys(obj.get(), path, Set.of("kind"));
+        yield Optional.of(FaceSpec.sealed(group));
+      }
+      case CONCENTRATION -> {
+        fields.onlyKeys(obj.get(), path, Set.of("kind", "value"));
+        yield value(obj.get(), path, 0, "a concentration")
+            .map(v -> new FaceSpec(group, FaceKind.CONCENTRATION, v, TimeTable.constant(0)));
+      }
+      case FLUX -> {
+        fields.onlyKeys(obj.get(), path, Set.of("kind", "value"));
+        yield value(obj.get(), path, Double.NEGATIVE_INFINITY, "an inward flux (amount/(m²·s))")
+            .map(v -> new FaceSpec(group, FaceKind.FLUX, v, TimeTable.constant(0)));
+      }
+      case EXCHANGE -> exchange(group, obj.get(), path);
+    };
+  }
+
+  private Optional<FaceSpec> exchange(String group, CaseNode.Obj obj, String path) {
+    fields.onlyKeys(obj, path, Set.of("kind", "value", "coefficient"));
+    Optional<TimeTable> value = value(obj, path, 0, "an environment concentration");
+    String hPath = CasePaths.child(path, "coefficient");
+    Optional<TimeTable> h =
+        fields
+            .required(obj, path, "coefficient", "a transfer coefficient (m/s)")
+            .flatMap(n -> fields.table(n, hPath, 0, "a transfer coefficient (m/s)"));
+    if (value.isEmpty() || h.isEmpty()) {
+      return Optional.empty();
+    }
+    return Optional.of(new FaceSpec(group, FaceKind.EXCHANGE, value.get(), h.get()));
+  }
+
+  private Optional<TimeTable> value(CaseNode.Obj obj, String path, double minimum, String what) {
+    String valuePath = CasePaths.child(path, "value");
+    return fields
+        .required(obj, path, "value", what + " or a time table [[t, value], ...]")
+        .flatMap(n -> fields.table(n, valuePath, minimum, what));
+  }
+}

@@ -1,0 +1,24 @@
+package dev.soakfield.fem.casefile;
+
+/** The partition a face group belongs to. */
+public enum FaceKind {
+  /** Prescribed concentration in the adjacent material (Dirichlet). */
+  CONCENTRATION("concentration"),
+  /** Prescribed inward flux, amount per m² per s (Neumann). */
+  FLUX("flux"),
+  /** Inward flux h·(c_env − c) with transfer coefficient h in m/s (Robin). */
+  EXCHANGE("exchange"),
+  /** No flux. */
+  SEALED("sealed");
+
+  private final String word;
+
+  FaceKind(String word) {
+    this.word = word;
+  }
+
+  /** The spelling in a case file. */
+  public String word() {
+    return word;
+  }
+}

@@ -1,0 +1,183 @@
+package dev.soakfield.fem.casefile;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+
+/** Reads {@code time}: end, output times, scheme, capacity and step control. */
+final class TimeBinder {
+  private static final Set<String> KEYS =
+      Set.of(
+          "end", "outputs", "scheme", "capacity", "tolerance", "step", "initial_step", "max_step");
+  private static final String SECONDS = "a positive number of seconds";
+
+  private final CaseFields fields;
+
+  TimeBinder(CaseFields fields) {
+    this.fields = fields;
+  }
+
+  Optional<TimeSpec> bind(CaseNode node, String path) {
+    Optional<CaseNode.Obj> found = fields.object(node, path, "an object with end");
+    if (found.isEmpty()) {
+      return Optional.empty();
+    }
+    CaseNode.Obj obj = found.get();
+    fields.onlyKeys(obj, path, KEYS);
+    String endPath = CasePaths.child(path, "end");
+    OptionalDouble end =
+        fields
+            .required(obj, path, "end", SECONDS)
+            .map(n -> fields.positive(n, endPath, SECONDS))
+            .orElse(OptionalDouble.empty());
+    Optional<List<Double>> outputs = Optional.empty();
+    if (end.isPresent()) {
+      outputs =
+          CaseFields.optional(obj, "outputs")
+              .map(n -> outputs(n, CasePaths.child(path, "outputs"), end.getAsDouble()))
+              .orElse(Optional.of(List.of(end.getAsDouble())));
+    }
+    Optional<TimeScheme> scheme =
+        CaseFields.optional(obj, "scheme")
+            .map(
+                n ->
+                    fields.word(
+                        n, CasePaths.child(path, "scheme"), TimeScheme.values(), TimeScheme::word))
+            .orElse(Optional.of(TimeScheme.BACKWARD_EULER));
+    Optional<CapacityForm> capacity =
+        CaseFields.optional(obj, "capacity")
+            .map(
+                n ->
+                    fields.word(
+                        n,
+                        CasePaths.child(path, "capacity"),
+                        CapacityForm.values(),
+                        CapacityForm::word))
+            .orElse(Optional.of(CapacityForm.CONSISTENT));
+    Optional<StepControl> steps = steps(obj, path);
+    if (end.isEmpty()
+        || outputs.isEmpty()
+        || scheme.isEmpty()
+        || capacity.isEmpty()
+        || steps.isEmpty()) {
+      return Optional.empty();
+    }
+    return Optional.of(
+        new TimeSpec(end.getAsDouble(), outputs.get(), scheme.get(), capacity.get(), steps.get()));
+  }
+
+  private Optional<List<Double>> outputs(CaseNode node, String path, double end) {
+    String expected = "an array of increasing times in (0, " + CaseFields.plain(end) + "]";
+    if (!(node instanceof CaseNode.Arr arr) || arr.items().isEmpty()) {
+      fields.problems().found(node, path, expected);
+      return Optional.empty();
+    }
+    List<Double> out = new ArrayList<>();
+    double previous = 0;
+    for (int i = 0; i < arr.items().size(); i++) {
+      CaseNode item = arr.items().get(i);
+      String itemPath = CasePaths.item(path, i);
+      String bounds =
+          "a time in (" + CaseFields.plain(previous) + ", " + CaseFields.plain(end) + "]";
+      OptionalDouble t = fields.number(item, itemPath, bounds);
+      if (t.isEmpty()) {
+        return Optional.empty();
+      }
+      if (!(t.getAsDouble() > previous) || t.getAsDouble() > end) {
+        fields
+            .problems()
+            .found(
+                item,
+                itemPath,
+                i == 0 ? bounds : bounds + " (output times must increase strictly)");
+        return Optional.empty();
+      }
+      previous = t.getAsDouble();
+      out.add(previous);
+    }
+    return Optional.of(out);
+  }
+
+  private Optional<StepControl> steps(CaseNode.Obj obj, String path) {
+    Optional<CaseNode.Member> tolerance = Optional.ofNullable(obj.members().get("tolerance"));
+    Optional<CaseNode.Member> step = Optional.ofNullable(obj.members().get("step"));
+    Optional<CaseNode.Member> initial = Optional.ofNullable(obj.members().get("initial_step"));
+    Optional<CaseNode.Member> max = Optional.ofNullable(obj.members().get("max_step"));
+    if (tolerance.isPresent() && step.isPresent()) {
+      CaseNode.Member first = tolerance.get();
+      CaseNode.Member second = step.get();
+      if (second.keyLine() < first.keyLine()
+          || (second.keyLine() == first.keyLine() && second.keyColumn() < first.keyColumn())) {
+        first = step.get();
+        second = tolerance.get();
+      }
+      fields
+          .problems()
+          .add(
+              second.keyLine(),
+              second.keyColumn(),
+              CasePaths.child(path, second.key()),
+              "found both 'tolerance' and 'step' ('"
+                  + first.key()
+                  + "' on line "
+                  + first.keyLine()
+                  + "), expected one of them: tolerance for adaptive steps or step for fixed"
+                  + " steps");
+      return Optional.empty();
+    }
+    if (step.isPresent()) {
+      boolean ok = true;
+      for (Optional<CaseNode.Member> adaptiveOnly : List.of(initial, max)) {
+        if (adaptiveOnly.isPresent()) {
+          CaseNode.Member m = adaptiveOnly.get();
+          fields
+              .problems()
+              .add(
+                  m.keyLine(),
+                  m.keyColumn(),
+                  CasePaths.child(path, m.key()),
+                  "found with fixed steps ('step'), expected only with adaptive steps"
+                      + " ('tolerance')");
+          ok = false;
+        }
+      }
+      OptionalDouble length =
+          fields.positive(step.get().value(), CasePaths.child(path, "step"), SECONDS);
+      return ok && length.isPresent()
+          ? Optional.of(new StepControl.Fixed(length.getAsDouble()))
+          : Optional.empty();
+    }
+    OptionalDouble tol = OptionalDouble.of(StepControl.DEFAULT_TOLERANCE);
+    if (tolerance.isPresent()) {
+      tol =
+          fields.positive(
+              tolerance.get().value(), CasePaths.child(path, "tolerance"), "a positive number");
+    }
+    OptionalDouble first = seconds(initial, path);
+    OptionalDouble largest = seconds(max, path);
+    boolean ok = tol.isPresent() && (initial.isEmpty() || first.isPresent());
+    ok &= max.isEmpty() || largest.isPresent();
+    if (first.isPresent() && largest.isPresent() && first.getAsDouble() > largest.getAsDouble()) {
+      fields
+          .problems()
+          .found(
+              initial.get().value(),
+              CasePaths.child(path, "initial_step"),
+              "at most max_step (" + CaseFields.plain(largest.getAsDouble()) + ")");
+      ok = false;
+    }
+    return ok
+        ? Optional.of(new StepControl.Adaptive(tol.getAsDouble(), first, largest))
+        : Optional.empty();
+  }
+
+  private OptionalDouble seconds(Optional<CaseNode.Member> member, String path) {
+    if (member.isEmpty()) {
+      return OptionalDouble.empty();
+    }
+    return fields.positive(
+        member.get().value(), CasePaths.child(path, member.get().key()), SECONDS);
+  }
+}
