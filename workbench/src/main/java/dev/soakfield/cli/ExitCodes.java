@@ -1,5 +1,8 @@
 package dev.soakfield.cli;
 
+import dev.soakfield.fem.casefile.CaseInputException;
+import dev.soakfield.fem.solve.SolverStalledException;
+import dev.soakfield.fem.time.RunFailedException;
 import dev.soakfield.mesh.MeshInputException;
 import java.io.PrintWriter;
 import picocli.CommandLine;
@@ -48,8 +51,13 @@ public final class ExitCodes {
   }
 
   static int codeFor(Throwable ex) {
-    if (ex instanceof MeshInputException || ex instanceof UserInputException) {
+    if (ex instanceof MeshInputException
+        || ex instanceof UserInputException
+        || ex instanceof CaseInputException) {
       return BAD_INPUT;
+    }
+    if (ex instanceof RunFailedException || ex instanceof SolverStalledException) {
+      return NUMERICAL_FAILURE;
     }
     if (ex instanceof java.nio.file.NoSuchFileException
         || ex instanceof java.nio.file.AccessDeniedException) {

@@ -12,6 +12,8 @@ import picocli.CommandLine.Command;
     subcommands = {
       MeshCommand.class,
       InfoCommand.class,
+      RunCommand.class,
+      DemoCommand.class,
       BenchCommand.class,
       CommandLine.HelpCommand.class
     })

@@ -1,5 +1,6 @@
 package dev.soakfield.fem.casefile;
 
+import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.mesh.FaceGroup;
 import dev.soakfield.mesh.FaceGroupKind;
 import dev.soakfield.mesh.TetMesh;

@@ -1,5 +1,6 @@
 package dev.soakfield.fem.casefile;
 
+import dev.soakfield.fem.physics.FaceKind;
 import java.util.Objects;
 
 /**

@@ -1,5 +1,7 @@
 package dev.soakfield.fem.casefile;
 
+import dev.soakfield.fem.physics.TimeFunction;
+
 import java.util.Arrays;
 
 /**
@@ -7,7 +9,7 @@ import java.util.Arrays;
  * last value outside them. A constant table has no breakpoints. Immutable; {@link #at} is cheap
  * enough to call once per step and face group.
  */
-public final class TimeTable {
+public final class TimeTable implements TimeFunction {
   private final double[] times;
   private final double[] values;
 
@@ -55,6 +57,7 @@ public final class TimeTable {
   }
 
   /** The value at time {@code t}: linear between breakpoints, held outside them. */
+  @Override
   public double at(double t) {
     int n = times.length;
     if (n == 0 || t <= times[0]) {
@@ -79,6 +82,7 @@ public final class TimeTable {
   }
 
   /** The times where the slope may change (a copy); empty for a constant table. */
+  @Override
   public double[] breakpoints() {
     return times.clone();
   }

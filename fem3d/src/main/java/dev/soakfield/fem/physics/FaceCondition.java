@@ -11,7 +11,7 @@ import java.util.Objects;
  * @param value concentration (CONCENTRATION, EXCHANGE: c_env) or inward flux (FLUX); unused for SEALED
  * @param coefficient surface transfer coefficient h in m/s (EXCHANGE only)
  * @param faces the mesh's face indices of the group
- * @param solubility solubility of the material next to the group (converts c to the potential)
+ * @param faceSolubility solubility of the material next to each face (converts c to the potential)
  */
 public record FaceCondition(
     int group,
@@ -20,13 +20,22 @@ public record FaceCondition(
     TimeFunction value,
     TimeFunction coefficient,
     int[] faces,
-    double solubility) {
+    double[] faceSolubility) {
   public FaceCondition {
     Objects.requireNonNull(name, "name");
     Objects.requireNonNull(kind, "kind");
     Objects.requireNonNull(value, "value");
     Objects.requireNonNull(coefficient, "coefficient");
     faces = faces.clone();
+    faceSolubility = faceSolubility.clone();
+    if (faceSolubility.length != faces.length) {
+      throw new IllegalArgumentException("one solubility per face expected");
+    }
+  }
+
+  @Override
+  public double[] faceSolubility() {
+    return faceSolubility.clone();
   }
 
   @Override

@@ -1,13 +1,24 @@
 package dev.soakfield.fem.physics;
 
-/** What happens at a face group: the four partitions of the boundary. */
+/** The partition a face group belongs to. */
 public enum FaceKind {
-  /** Concentration prescribed (Dirichlet on the potential, through the adjacent solubility). */
-  CONCENTRATION,
-  /** Inward amount per area and time prescribed (Neumann). */
-  FLUX,
-  /** Inward flux h·(c_env − c), a surface transfer coefficient (Robin). */
-  EXCHANGE,
+  /** Prescribed concentration in the adjacent material (Dirichlet). */
+  CONCENTRATION("concentration"),
+  /** Prescribed inward flux, amount per m² per s (Neumann). */
+  FLUX("flux"),
+  /** Inward flux h·(c_env − c) with transfer coefficient h in m/s (Robin). */
+  EXCHANGE("exchange"),
   /** No flux. */
-  SEALED
+  SEALED("sealed");
+
+  private final String word;
+
+  FaceKind(String word) {
+    this.word = word;
+  }
+
+  /** The spelling in a case file. */
+  public String word() {
+    return word;
+  }
 }

@@ -49,7 +49,8 @@ public final class ThetaStepper {
 
   private record Flux(FaceCondition condition, double[] unitLoad, double area) {}
 
-  private record Prescribed(FaceCondition condition, int[] dofs) {}
+  /** Prescribed dofs of one group and 1/S at each (c = S·φ, so φ = c / S). */
+  private record Prescribed(FaceCondition condition, int[] dofs, double[] inverseS) {}
 
   /**
    * @param lumped lumped (diagonal) capacity instead of consistent
@@ -87,7 +88,7 @@ public final class ThetaStepper {
       switch (fc.kind()) {
         case CONCENTRATION -> {
           int[] dofs = asm.faceDofs(faces);
-          prescribed.add(new Prescribed(fc, dofs));
+          prescribed.add(new Prescribed(fc, dofs, inverseSolubility(fc, dofs)));
           for (int d : dofs) {
             if (!isPrescribed[d]) {
               isPrescribed[d] = true;
@@ -102,9 +103,7 @@ public final class ThetaStepper {
         }
         case EXCHANGE -> {
           CsrMatrix h = asm.newMatrix();
-          double[] s = new double[faces.length];
-          Arrays.fill(s, fc.solubility());
-          asm.addFaceMass(h, faces, s, 1.0);
+          asm.addFaceMass(h, faces, fc.faceSolubility(), 1.0);
           double[] load = new double[n];
           asm.addFaceLoad(load, faces, ones, 1.0);
           double[] rowSums = new double[n];
@@ -124,6 +123,29 @@ public final class ThetaStepper {
     unreduced = capacity.zeroCopy();
     eliminated = eliminatedPositions();
     solver = new PcgSolver(solverTolerance, maxIterations, PreconditionerKind.AUTO);
+  }
+
+  /**
+   * 1/S per prescribed dof. A dof shared by faces next to materials of different solubility takes
+   * the smaller S, the larger potential: the side that lets more in.
+   */
+  private double[] inverseSolubility(FaceCondition fc, int[] dofs) {
+    var mesh = model.space().mesh();
+    int[] faces = fc.faces();
+    double[] faceS = fc.faceSolubility();
+    double[] minS = new double[mesh.nodeCount()];
+    Arrays.fill(minS, Double.POSITIVE_INFINITY);
+    for (int i = 0; i < faces.length; i++) {
+      for (int k = 0; k < mesh.nodesPerFace(); k++) {
+        int v = mesh.faceNode(faces[i], k);
+        minS[v] = Math.min(minS[v], faceS[i]);
+      }
+    }
+    double[] inv = new double[dofs.length];
+    for (int i = 0; i < dofs.length; i++) {
+      inv[i] = 1.0 / minS[dofs[i]];
+    }
+    return inv;
   }
 
   private int[] eliminatedPositions() {
@@ -183,10 +205,11 @@ public final class ThetaStepper {
   /** Sets the prescribed potentials of time t into phi (used for the initial state as well). */
   public void applyPrescribed(double[] phi, double t) {
     for (Prescribed p : prescribed) {
-      double v = p.condition().value().at(t) / p.condition().solubility();
-      for (int d : p.dofs()) {
-        if (prescribedOwner[d] == p.condition().group()) {
-          phi[d] = v;
+      double c = p.condition().value().at(t);
+      int[] dofs = p.dofs();
+      for (int i = 0; i < dofs.length; i++) {
+        if (prescribedOwner[dofs[i]] == p.condition().group()) {
+          phi[dofs[i]] = c * p.inverseS()[i];
         }
       }
     }

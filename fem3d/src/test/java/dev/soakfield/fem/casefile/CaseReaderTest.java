@@ -1,5 +1,6 @@
 package dev.soakfield.fem.casefile;
 
+import dev.soakfield.fem.physics.FaceKind;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -45,7 +45,10 @@ final class SheetModels {
         throw new IllegalArgumentException("no face group " + e.getKey());
       }
       int[] members = facesOf(mesh, g);
-      double adjacentS = solubility[adjacentTet(mesh, members[0])];
+      double[] adjacentS = new double[members.length];
+      for (int i = 0; i < members.length; i++) {
+        adjacentS[i] = solubility[adjacentTet(mesh, members[i])];
+      }
       Condition c = e.getValue();
       faces.add(
           new FaceCondition(

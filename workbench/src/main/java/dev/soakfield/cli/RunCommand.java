@@ -1,0 +1,69 @@
+package dev.soakfield.cli;
+
+import dev.soakfield.fem.run.RunPipeline;
+import dev.soakfield.fem.run.RunSummary;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code soakfield run CASE.json --out DIR}: the transient analysis of one case. */
+@Command(
+    name = "run",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Solves the case's transient diffusion and writes series.csv, fields.pvd with fields/*.vtu,"
+          + " and summary.json into the output folder.",
+      "The folder appears when the run has finished; an earlier run's folder is replaced only then."
+    })
+final class RunCommand implements Callable<Integer> {
+  @Spec CommandSpec spec;
+
+  @Parameters(index = "0", paramLabel = "CASE.json", description = "The case file.")
+  Path caseFile;
+
+  @Option(
+      names = "--out",
+      required = true,
+      paramLabel = "DIR",
+      description = "Folder for the results.")
+  Path out;
+
+  @Option(names = "--quiet", description = "Print nothing but errors.")
+  boolean quiet;
+
+  @Override
+  public Integer call() throws Exception {
+    PrintWriter err = spec.commandLine().getErr();
+    ProgressLine progress = new ProgressLine(err, quiet);
+    RunSummary s = RunPipeline.run(caseFile, out, progress);
+    progress.done();
+    if (!quiet) {
+      report(spec.commandLine().getOut(), s);
+    }
+    return ExitCodes.OK;
+  }
+
+  static void report(PrintWriter out, RunSummary s) {
+    out.printf(
+        Locale.ROOT,
+        "results in %s: %d steps (%d rejected), %d solver iterations, balance error %.2e%n",
+        s.outputFolder(),
+        s.steps(),
+        s.rejectedSteps(),
+        s.linearIterations(),
+        s.balanceRelative());
+    for (String w : s.warnings()) {
+      out.println("warning: " + w);
+    }
+    out.println(
+        "caution: model estimates from the data given; where results bear on safety, check them"
+            + " against the applicable standards and a qualified engineer's review.");
+    out.flush();
+  }
+}
