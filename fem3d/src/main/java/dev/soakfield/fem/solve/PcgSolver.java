@@ -73,7 +73,7 @@ public final class PcgSolver {
     Preconditioner preconditioner =
         chosen == PreconditionerKind.JACOBI
             ? new JacobiPreconditioner(diagonal)
-            : amgPreconditioner(a);
+            : new AmgPreconditioner(AmgHierarchy.build(a));
     if (matrix == null || matrix.size() != a.size()) {
       cg = new CG(new DenseVector(a.size()));
       // Relative part 0: the target is absolute (rtol·‖b‖, set per solve), never relative to the
@@ -143,10 +143,6 @@ public final class PcgSolver {
         true,
         setupSeconds,
         (System.nanoTime() - start) * 1e-9);
-  }
-
-  private static Preconditioner amgPreconditioner(CsrMatrix a) {
-    throw new UnsupportedOperationException("AMG preconditioner: next commit, " + a.size());
   }
 
   private void requireMatrix() {
