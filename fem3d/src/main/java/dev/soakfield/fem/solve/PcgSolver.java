@@ -1,0 +1,161 @@
+package dev.soakfield.fem.solve;
+
+import dev.soakfield.fem.assembly.CsrMatrix;
+import java.util.Arrays;
+import java.util.Objects;
+import no.uib.cipr.matrix.DenseVector;
+import no.uib.cipr.matrix.sparse.CG;
+import no.uib.cipr.matrix.sparse.DefaultIterationMonitor;
+import no.uib.cipr.matrix.sparse.IterativeSolverNotConvergedException;
+import no.uib.cipr.matrix.sparse.Preconditioner;
+
+/**
+ * Preconditioned conjugate gradients for symmetric positive definite {@link CsrMatrix} systems, on
+ * MTJ's CG with our own parallel matrix product and preconditioners. Keeps work vectors: use one
+ * instance per thread.
+ */
+public final class PcgSolver {
+  private final double relativeTolerance;
+  private final int maxIterations;
+  private final PreconditionerKind kind;
+
+  private CsrMatrix matrix;
+  private CsrOperator operator;
+  private PreconditionerKind active;
+  private CG cg;
+  private DefaultIterationMonitor monitor;
+  private double setupSeconds;
+
+  /**
+   * @param relativeTolerance stop at ‖b − A x‖ ≤ relativeTolerance·‖b‖; in (0, 1)
+   * @param maxIterations iteration limit, at least 1
+   * @param kind the preconditioner, or AUTO to decide from each matrix
+   */
+  public PcgSolver(double relativeTolerance, int maxIterations, PreconditionerKind kind) {
+    if (!(relativeTolerance > 0 && relativeTolerance < 1)) {
+      throw new IllegalArgumentException(
+          "relative tolerance must lie in (0, 1), got " + relativeTolerance);
+    }
+    if (maxIterations < 1) {
+      throw new IllegalArgumentException(
+          "iteration limit must be at least 1, got " + maxIterations);
+    }
+    this.relativeTolerance = relativeTolerance;
+    this.maxIterations = maxIterations;
+    this.kind = Objects.requireNonNull(kind, "kind");
+  }
+
+  /**
+   * Declares the matrix for the following solves (call again when its values change) and builds the
+   * preconditioner. With AUTO the choice follows {@link PreconditionerChoice}: Jacobi when at least
+   * half of the rows have a row sum of at least 5 % of their diagonal (the capacity term M/Δt
+   * dominates: short steps), AMG otherwise.
+   *
+   * @throws IllegalArgumentException when a diagonal entry is not positive and finite (the matrix
+   *     cannot be positive definite)
+   */
+  public void setMatrix(CsrMatrix a) {
+    Objects.requireNonNull(a, "matrix");
+    long start = System.nanoTime();
+    double[] diagonal = a.diagonal();
+    for (int i = 0; i < diagonal.length; i++) {
+      if (!(diagonal[i] > 0 && diagonal[i] < Double.POSITIVE_INFINITY)) {
+        throw new IllegalArgumentException(
+            "row "
+                + i
+                + " has diagonal entry "
+                + diagonal[i]
+                + "; a positive definite matrix needs positive finite diagonal entries");
+      }
+    }
+    PreconditionerKind chosen =
+        kind == PreconditionerKind.AUTO ? PreconditionerChoice.choose(a, diagonal) : kind;
+    Preconditioner preconditioner =
+        chosen == PreconditionerKind.JACOBI
+            ? new JacobiPreconditioner(diagonal)
+            : new AmgPreconditioner(AmgHierarchy.build(a));
+    if (matrix == null || matrix.size() != a.size()) {
+      cg = new CG(new DenseVector(a.size()));
+      // Relative part 0: the target is absolute (rtol·‖b‖, set per solve), never relative to the
+      // starting residual, so a warm start does not over-solve. No divergence limit: CG's
+      // residual may rise before it falls; NaN is still caught by the monitor.
+      monitor = new DefaultIterationMonitor(maxIterations, 0.0, 0.0, Double.POSITIVE_INFINITY);
+      cg.setIterationMonitor(monitor);
+    }
+    cg.setPreconditioner(preconditioner);
+    matrix = a;
+    operator = new CsrOperator(a);
+    active = chosen;
+    setupSeconds = (System.nanoTime() - start) * 1e-9;
+  }
+
+  /** The preconditioner built for the current matrix (JACOBI or AMG; never AUTO). */
+  public PreconditionerKind activePreconditioner() {
+    requireMatrix();
+    return active;
+  }
+
+  /**
+   * Solves A x = b; {@code x} holds the starting guess (warm start) and receives the solution.
+   * Stops at ‖r‖ ≤ rtol·‖b‖. b = 0 gives x = 0 without iterating.
+   *
+   * @throws SolverStalledException when the iteration limit passes without convergence, or on a
+   *     breakdown (NaN)
+   */
+  public SolveStats solve(double[] b, double[] x) {
+    requireMatrix();
+    Objects.requireNonNull(b, "b");
+    Objects.requireNonNull(x, "x");
+    int n = matrix.size();
+    if (b.length != n || x.length != n) {
+      throw new IllegalArgumentException(
+          "vectors of length " + b.length + " and " + x.length + " for a matrix of " + n + " rows");
+    }
+    long start = System.nanoTime();
+    double rhsNorm = norm(b);
+    if (!(rhsNorm < Double.POSITIVE_INFINITY)) {
+      throw new IllegalArgumentException("right-hand side is not finite (norm " + rhsNorm + ")");
+    }
+    if (rhsNorm == 0) {
+      Arrays.fill(x, 0.0);
+      return new SolveStats(0, 0.0, 0.0, true, setupSeconds, (System.nanoTime() - start) * 1e-9);
+    }
+    monitor.setAbsoluteTolerance(relativeTolerance * rhsNorm);
+    try {
+      cg.solve(operator, new DenseVector(b, false), new DenseVector(x, false));
+    } catch (IterativeSolverNotConvergedException e) {
+      double residual = e.getResidual();
+      SolveStats stats =
+          new SolveStats(
+              e.getIterations(),
+              residual,
+              rhsNorm,
+              false,
+              setupSeconds,
+              (System.nanoTime() - start) * 1e-9);
+      throw new SolverStalledException(
+          stats, relativeTolerance, active, !(residual < Double.POSITIVE_INFINITY));
+    }
+    return new SolveStats(
+        monitor.iterations(),
+        monitor.residual(),
+        rhsNorm,
+        true,
+        setupSeconds,
+        (System.nanoTime() - start) * 1e-9);
+  }
+
+  private void requireMatrix() {
+    if (matrix == null) {
+      throw new IllegalStateException("no matrix: call setMatrix before solving");
+    }
+  }
+
+  private static double norm(double[] v) {
+    double s = 0;
+    for (double e : v) {
+      s += e * e;
+    }
+    return Math.sqrt(s);
+  }
+}

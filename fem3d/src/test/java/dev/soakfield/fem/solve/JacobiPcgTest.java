@@ -1,0 +1,48 @@
+package dev.soakfield.fem.solve;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.soakfield.fem.assembly.CsrMatrix;
+import org.junit.jupiter.api.Test;
+
+class JacobiPcgTest extends PcgSolverContractTest {
+  @Override
+  PreconditionerKind kind() {
+    return PreconditionerKind.JACOBI;
+  }
+
+  @Test
+  void inconsistentSingularSystemStallsAboveItsNullSpaceBound() {
+    // Sealed grid, no capacity: rows sum to zero, constants span the null space. For b = e_0 every
+    // residual b − A x keeps the component ⟨b, 1⟩/√n = 1/√n along the unit constant vector
+    // (exact linear algebra: range(A) ⊥ null(A) for symmetric A), so ‖r‖/‖b‖ ≥ 1/√n forever.
+    int n = 6;
+    CsrMatrix a = GridLaplacian.build(n, 0.0, false);
+    double[] b = new double[a.size()];
+    b[0] = 1;
+    PcgSolver solver = new PcgSolver(1e-8, 200, kind());
+    solver.setMatrix(a);
+    SolverStalledException e =
+        assertThrows(SolverStalledException.class, () -> solver.solve(b, new double[a.size()]));
+    assertEquals(200, e.stats().iterations());
+    assertTrue(e.stats().relativeResidual() >= (1 - 1e-9) / Math.sqrt(a.size()));
+    assertTrue(e.getMessage().contains("did not converge after 200 iterations"), e.getMessage());
+  }
+
+  @Test
+  void breakdownOnAZeroCurvatureDirectionIsReported() {
+    // Same singular matrix with b = D·1: the first Jacobi direction is exactly the constant vector,
+    // A·1 = 0 in exact integer arithmetic, so p·Ap = 0 and the step is infinite: the residual turns
+    // NaN, a breakdown, reported as such.
+    CsrMatrix a = GridLaplacian.build(5, 0.0, false);
+    double[] b = a.diagonal();
+    PcgSolver solver = new PcgSolver(1e-8, 50, kind());
+    solver.setMatrix(a);
+    SolverStalledException e =
+        assertThrows(SolverStalledException.class, () -> solver.solve(b, new double[a.size()]));
+    assertTrue(e.getMessage().contains("broke down"), e.getMessage());
+    assertTrue(Double.isNaN(e.stats().residualNorm()));
+  }
+}
