@@ -14,6 +14,7 @@ import picocli.CommandLine.Command;
       InfoCommand.class,
       RunCommand.class,
       DemoCommand.class,
+      VerifyCommand.class,
       BenchCommand.class,
       CommandLine.HelpCommand.class
     })

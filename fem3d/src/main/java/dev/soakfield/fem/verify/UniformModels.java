@@ -1,0 +1,95 @@
+package dev.soakfield.fem.verify;
+
+import dev.soakfield.fem.assembly.FeSpace;
+import dev.soakfield.fem.physics.DiffusionModel;
+import dev.soakfield.fem.physics.FaceCondition;
+import dev.soakfield.fem.physics.FaceKind;
+import dev.soakfield.fem.physics.FaceOwners;
+import dev.soakfield.fem.physics.TimeFunction;
+import dev.soakfield.mesh.TetMesh;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+
+/** Models for the verification cases: materials per volume group, conditions by face group. */
+final class UniformModels {
+  private UniformModels() {}
+
+  /** A constant condition on a face group. */
+  record Condition(FaceKind kind, double value, double coefficient) {
+    static Condition concentration(double c) {
+      return new Condition(FaceKind.CONCENTRATION, c, 0);
+    }
+
+    static Condition flux(double q) {
+      return new Condition(FaceKind.FLUX, q, 0);
+    }
+
+    static Condition exchange(double h, double cEnv) {
+      return new Condition(FaceKind.EXCHANGE, cEnv, h);
+    }
+  }
+
+  /** Isotropic D and S per volume group (by index), a first-order rate per group, uniform c0. */
+  static DiffusionModel model(
+      TetMesh mesh,
+      double[] dPerGroup,
+      double[] sPerGroup,
+      double[] ratePerGroup,
+      double c0,
+      Map<String, Condition> conditions) {
+    int tets = mesh.tetCount();
+    double[] sol = new double[tets];
+    double[] tensor = new double[6 * tets];
+    double[] rate = new double[tets];
+    for (int t = 0; t < tets; t++) {
+      int g = mesh.tetGroup(t);
+      sol[t] = sPerGroup[g];
+      rate[t] = ratePerGroup[g];
+      for (int k = 0; k < 3; k++) {
+        tensor[6 * t + k] = dPerGroup[g] * sPerGroup[g];
+      }
+    }
+    int[] owner = FaceOwners.of(mesh);
+    List<FaceCondition> faces = new ArrayList<>();
+    for (var e : conditions.entrySet()) {
+      int g = mesh.faceGroupIndex(e.getKey());
+      if (g < 0) {
+        throw new IllegalArgumentException("no face group " + e.getKey());
+      }
+      int[] members =
+          java.util.stream.IntStream.range(0, mesh.faceCount())
+              .filter(f -> mesh.faceGroup(f) == g)
+              .toArray();
+      double[] faceS = new double[members.length];
+      for (int i = 0; i < members.length; i++) {
+        faceS[i] = sol[owner[members[i]]];
+      }
+      Condition c = e.getValue();
+      faces.add(
+          new FaceCondition(
+              g,
+              e.getKey(),
+              c.kind(),
+              TimeFunction.constant(c.value()),
+              TimeFunction.constant(c.coefficient()),
+              members,
+              faceS));
+    }
+    double[] phi0 = new double[mesh.nodeCount()];
+    for (int t = 0; t < tets; t++) {
+      for (int k = 0; k < mesh.nodesPerTet(); k++) {
+        phi0[mesh.tetNode(t, k)] = c0 / sol[t];
+      }
+    }
+    return new DiffusionModel(
+        FeSpace.of(mesh), sol, tensor, rate, new double[tets], faces, phi0);
+  }
+
+  static double[] filled(int n, double v) {
+    double[] a = new double[n];
+    Arrays.fill(a, v);
+    return a;
+  }
+}

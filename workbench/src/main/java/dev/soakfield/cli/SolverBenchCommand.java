@@ -1,0 +1,37 @@
+package dev.soakfield.cli;
+
+import dev.soakfield.fem.solve.SolverBench;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code soakfield bench solver}: SpMV against a STREAM triad, PCG against MTJ's stock CG. */
+@Command(
+    name = "solver",
+    mixinStandardHelpOptions = true,
+    description = {
+      "SpMV bandwidth as a share of a STREAM triad on the same threads, and time to solution of"
+          + " our PCG (Jacobi, AMG) against MTJ's CG with its diagonal preconditioner, for short"
+          + " and long time steps; all ratios measured in this run."
+    })
+final class SolverBenchCommand implements Callable<Integer> {
+  @Spec CommandSpec spec;
+
+  @Option(
+      names = "--grid",
+      defaultValue = "65",
+      description = "Grid points per axis of the test matrix (65: 274,625 rows).")
+  int grid;
+
+  @Override
+  public Integer call() {
+    if (grid < 4) {
+      throw new UserInputException("--grid: found " + grid + ", expected at least 4");
+    }
+    SolverBench.run(spec.commandLine().getOut(), grid);
+    spec.commandLine().getOut().flush();
+    return ExitCodes.OK;
+  }
+}

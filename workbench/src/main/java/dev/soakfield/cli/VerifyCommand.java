@@ -1,0 +1,56 @@
+package dev.soakfield.cli;
+
+import dev.soakfield.fem.verify.Check;
+import dev.soakfield.fem.verify.Verification;
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Spec;
+
+/** {@code soakfield verify}: the built-in verification cases, as a table, on this machine. */
+@Command(
+    name = "verify",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Runs the built-in verification cases (published solutions, exact conservation, the discrete"
+          + " maximum principle) on modest meshes and prints case, source, reference, computed"
+          + " value, error and verdict.",
+      "Exit code 3 when any check fails."
+    })
+final class VerifyCommand implements Callable<Integer> {
+  @Spec CommandSpec spec;
+
+  @Override
+  public Integer call() {
+    List<Check> checks = Verification.all();
+    PrintWriter out = spec.commandLine().getOut();
+    out.printf(
+        Locale.ROOT,
+        "%-62s %-52s %12s %12s %10s %s%n",
+        "case",
+        "source",
+        "reference",
+        "computed",
+        "error",
+        "result");
+    int failed = 0;
+    for (Check c : checks) {
+      out.printf(
+          Locale.ROOT,
+          "%-62s %-52s %12.7g %12.7g %10.2e %s%n",
+          c.caseName(),
+          c.source(),
+          c.reference(),
+          c.computed(),
+          c.error(),
+          c.passed() ? "pass" : "FAIL");
+      failed += c.passed() ? 0 : 1;
+    }
+    out.printf(Locale.ROOT, "%d passed, %d failed%n", checks.size() - failed, failed);
+    out.flush();
+    return failed == 0 ? ExitCodes.OK : ExitCodes.NUMERICAL_FAILURE;
+  }
+}
