@@ -1,7 +1,6 @@
 package dev.soakfield.fem.casefile;
 
 import dev.soakfield.fem.physics.TimeFunction;
-
 import java.util.Arrays;
 
 /**

@@ -47,7 +47,8 @@ public final class DiffusionModel {
 
   private static double[] check(double[] a, int length, String what) {
     if (a.length != length) {
-      throw new IllegalArgumentException(what + " has " + a.length + " entries, expected " + length);
+      throw new IllegalArgumentException(
+          what + " has " + a.length + " entries, expected " + length);
     }
     return a.clone();
   }

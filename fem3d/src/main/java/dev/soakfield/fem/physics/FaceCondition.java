@@ -2,44 +2,74 @@ package dev.soakfield.fem.physics;
 
 import java.util.Objects;
 
-/**
- * The condition on one face group.
- *
- * @param group face group index in the mesh
- * @param name face group name
- * @param kind the partition
- * @param value concentration (CONCENTRATION, EXCHANGE: c_env) or inward flux (FLUX); unused for SEALED
- * @param coefficient surface transfer coefficient h in m/s (EXCHANGE only)
- * @param faces the mesh's face indices of the group
- * @param faceSolubility solubility of the material next to each face (converts c to the potential)
- */
-public record FaceCondition(
-    int group,
-    String name,
-    FaceKind kind,
-    TimeFunction value,
-    TimeFunction coefficient,
-    int[] faces,
-    double[] faceSolubility) {
-  public FaceCondition {
-    Objects.requireNonNull(name, "name");
-    Objects.requireNonNull(kind, "kind");
-    Objects.requireNonNull(value, "value");
-    Objects.requireNonNull(coefficient, "coefficient");
-    faces = faces.clone();
-    faceSolubility = faceSolubility.clone();
+/** The condition on one face group, with the faces it covers and the solubility next to each. */
+public final class FaceCondition {
+  private final int group;
+  private final String name;
+  private final FaceKind kind;
+  private final TimeFunction value;
+  private final TimeFunction coefficient;
+  private final int[] faces;
+  private final double[] faceSolubility;
+
+  /**
+   * A condition on the faces of one group.
+   *
+   * @param group face group index in the mesh
+   * @param name face group name
+   * @param kind the partition
+   * @param value concentration (CONCENTRATION; EXCHANGE: c_env) or inward flux (FLUX)
+   * @param coefficient surface transfer coefficient h in m/s (EXCHANGE only)
+   * @param faces the mesh's face indices of the group
+   * @param faceSolubility solubility of the material next to each face (c = S·φ)
+   */
+  public FaceCondition(
+      int group,
+      String name,
+      FaceKind kind,
+      TimeFunction value,
+      TimeFunction coefficient,
+      int[] faces,
+      double[] faceSolubility) {
+    this.group = group;
+    this.name = Objects.requireNonNull(name, "name");
+    this.kind = Objects.requireNonNull(kind, "kind");
+    this.value = Objects.requireNonNull(value, "value");
+    this.coefficient = Objects.requireNonNull(coefficient, "coefficient");
+    this.faces = faces.clone();
+    this.faceSolubility = faceSolubility.clone();
     if (faceSolubility.length != faces.length) {
       throw new IllegalArgumentException("one solubility per face expected");
     }
   }
 
-  @Override
-  public double[] faceSolubility() {
-    return faceSolubility.clone();
+  public int group() {
+    return group;
   }
 
-  @Override
+  public String name() {
+    return name;
+  }
+
+  public FaceKind kind() {
+    return kind;
+  }
+
+  public TimeFunction value() {
+    return value;
+  }
+
+  public TimeFunction coefficient() {
+    return coefficient;
+  }
+
+  /** The face indices (a copy). */
   public int[] faces() {
     return faces.clone();
+  }
+
+  /** Solubility next to each face (a copy). */
+  public double[] faceSolubility() {
+    return faceSolubility.clone();
   }
 }

@@ -1,6 +1,8 @@
 package dev.soakfield.fem.physics;
 
-/** A boundary value or coefficient as a function of time, with the times where its slope changes. */
+/**
+ * A boundary value or coefficient as a function of time, with the times where its slope changes.
+ */
 public interface TimeFunction {
   double at(double t);
 

@@ -17,6 +17,8 @@ public final class GroupMonitor {
   private double[] previousMax;
 
   /**
+   * Starts the monitor at the initial state.
+   *
    * @param threshold threshold concentration, or NaN for none
    */
   public GroupMonitor(

@@ -3,8 +3,8 @@ package dev.soakfield.fem.post;
 import java.util.Arrays;
 
 /**
- * The time each node first reaches a threshold concentration, interpolated linearly within the
- * step in which it is crossed; -1 where it has not been reached.
+ * The time each node first reaches a threshold concentration, interpolated linearly within the step
+ * in which it is crossed; -1 where it has not been reached.
  */
 public final class ThresholdClock {
   private final double threshold;

@@ -19,6 +19,8 @@ public final class ModelBuilder {
   private ModelBuilder() {}
 
   /**
+   * Coefficients per tetrahedron, conditions per face group and the initial potential.
+   *
    * @param spec a case already checked against {@code mesh} (every volume group has a material,
    *     every face entry names a face group of the mesh)
    * @param warnings receives what the user should know (e.g. mixed solubility on one face group)
@@ -70,7 +72,8 @@ public final class ModelBuilder {
                 + " concentration is applied in the material of smaller solubility");
       }
       faces.add(
-          new FaceCondition(g, f.faceGroup(), f.kind(), f.value(), f.coefficient(), members, faceS));
+          new FaceCondition(
+              g, f.faceGroup(), f.kind(), f.value(), f.coefficient(), members, faceS));
     }
     double[] phi0 = new double[mesh.nodeCount()];
     double[] nodeS = new double[mesh.nodeCount()];

@@ -9,9 +9,9 @@ import java.util.Comparator;
 import java.util.stream.Stream;
 
 /**
- * The output folder of a run, filled in a hidden sibling folder and moved into place only when
- * the run has finished: a failed or interrupted run never leaves results that look complete, and
- * the results of an earlier run stay until the new ones are whole.
+ * The output folder of a run, filled in a hidden sibling folder and moved into place only when the
+ * run has finished: a failed or interrupted run never leaves results that look complete, and the
+ * results of an earlier run stay until the new ones are whole.
  */
 public final class ResultFolder {
   private final Path target;

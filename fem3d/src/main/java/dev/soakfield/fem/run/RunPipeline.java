@@ -44,8 +44,8 @@ import java.util.Optional;
 
 /**
  * {@code run}: case file in, results out — reads and checks the case and its mesh, builds the
- * model, steps through time, and writes series.csv, fields (VTU/PVD) and summary.json into a
- * folder that appears only when the run has finished.
+ * model, steps through time, and writes series.csv, fields (VTU/PVD) and summary.json into a folder
+ * that appears only when the run has finished.
  */
 public final class RunPipeline {
   /** Relative residual of each linear solve: tight, so the global balance closes to ~1e-10. */
@@ -66,7 +66,10 @@ public final class RunPipeline {
     for (MeshFinding f : imported.report().findings()) {
       if (f.severity() == MeshFinding.Severity.ERROR) {
         throw new MeshInputException(
-            spec.mesh().toString(), "", f.message(), "a mesh without errors (see 'soakfield info')");
+            spec.mesh().toString(),
+            "",
+            f.message(),
+            "a mesh without errors (see 'soakfield info')");
       }
       if (f.severity() == MeshFinding.Severity.WARNING) {
         warnings.add("mesh: " + f.message());
@@ -96,8 +99,7 @@ public final class RunPipeline {
     List<String> warnings = new ArrayList<>(prepared.warnings());
     DiffusionModel model = ModelBuilder.build(spec, mesh, warnings);
     boolean lumped = spec.time().capacity() == CapacityForm.LUMPED;
-    ThetaStepper stepper =
-        new ThetaStepper(model, lumped, SOLVER_TOLERANCE, SOLVER_MAX_ITERATIONS);
+    ThetaStepper stepper = new ThetaStepper(model, lumped, SOLVER_TOLERANCE, SOLVER_MAX_ITERATIONS);
     TimeSettings settings = settings(spec);
 
     ResultFolder folder = ResultFolder.open(outDir);
@@ -205,12 +207,26 @@ public final class RunPipeline {
               .filter(g -> mesh.faceGroups().get(g).kind() == FaceGroupKind.EXTERIOR)
               .toArray();
       cumulativeInflow = new double[mesh.faceGroups().size()];
-      amount0 = stepper.amount(phi0);
+      amount0 = stepper.amount(model.initialPhi()); // before held faces are raised
       amountNow = amount0;
       Files.createDirectories(dir.resolve("fields"));
       series = new SeriesTable(dir.resolve("series.csv"), header());
-      series.row(row(0.0, 0.0, phi0, new double[cumulativeInflow.length], groups.maxima(phi0)));
-      writeFrame(0.0, phi0);
+    }
+
+    @Override
+    public void started(dev.soakfield.fem.time.StepOutcome initial) {
+      try {
+        double[] raised = initial.faceInflow();
+        for (int g = 0; g < raised.length; g++) {
+          cumulativeInflow[g] += raised[g];
+          moved += Math.abs(raised[g]);
+        }
+        amountNow = initial.amount();
+        series.row(row(0.0, 0.0, initial.phi(), raised, groups.maxima(initial.phi())));
+        writeFrame(0.0, initial.phi());
+      } catch (IOException e) {
+        throw new UncheckedIOException(e);
+      }
     }
 
     private List<String> header() {

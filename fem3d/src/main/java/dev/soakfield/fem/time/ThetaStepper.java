@@ -4,7 +4,6 @@ import dev.soakfield.fem.assembly.CsrMatrix;
 import dev.soakfield.fem.assembly.SystemAssembler;
 import dev.soakfield.fem.physics.DiffusionModel;
 import dev.soakfield.fem.physics.FaceCondition;
-import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.solve.PcgSolver;
 import dev.soakfield.fem.solve.PreconditionerKind;
 import java.util.ArrayList;
@@ -18,10 +17,11 @@ import java.util.List;
  *
  * where R, nonzero only on prescribed-concentration nodes, is the amount those nodes take in during
  * the step (the consistent reaction, so the balance closes). Prescribed nodes are eliminated
- * symmetrically (their columns move to the right-hand side), so the system stays symmetric
- * positive definite for conjugate gradients. Matrices are assembled once; the system matrix and its
+ * symmetrically (their columns move to the right-hand side), so the system stays symmetric positive
+ * definite for conjugate gradients. Matrices are assembled once; the system matrix and its
  * preconditioner are rebuilt only when dt or a coefficient changes.
  */
+@SuppressWarnings("ArrayRecordComponent") // private records carry precomputed arrays, never shared
 public final class ThetaStepper {
   private final DiffusionModel model;
   private final CsrMatrix capacity;
@@ -44,8 +44,12 @@ public final class ThetaStepper {
   private double systemTheta = Double.NaN;
   private double[] systemH = new double[0];
 
-  private record Exchange(FaceCondition condition, CsrMatrix mass, double[] massRowSums,
-      double[] unitLoad, double area) {}
+  private record Exchange(
+      FaceCondition condition,
+      CsrMatrix mass,
+      double[] massRowSums,
+      double[] unitLoad,
+      double area) {}
 
   private record Flux(FaceCondition condition, double[] unitLoad, double area) {}
 
@@ -53,6 +57,8 @@ public final class ThetaStepper {
   private record Prescribed(FaceCondition condition, int[] dofs, double[] inverseS) {}
 
   /**
+   * Assembles the capacity, stiffness, source and boundary matrices of the model once.
+   *
    * @param lumped lumped (diagonal) capacity instead of consistent
    * @param solverTolerance relative residual ‖r‖ ≤ tol·‖b‖ of each linear solve
    */
@@ -202,7 +208,24 @@ public final class ThetaStepper {
     return dot(capacityRowSums, phi);
   }
 
-  /** Sets the prescribed potentials of time t into phi (used for the initial state as well). */
+  /**
+   * Sets the prescribed potentials of time t into phi and returns, per face group, the amount that
+   * raising them added: at the start of a run a held face takes in at once what fills the first
+   * layer of elements, and the balance counts it as inflow.
+   */
+  public double[] raise(double[] phi, double t) {
+    double[] before = phi.clone();
+    applyPrescribed(phi, t);
+    double[] added = new double[faceGroupCount];
+    for (int i = 0; i < phi.length; i++) {
+      if (isPrescribed[i] && phi[i] != before[i]) {
+        added[prescribedOwner[i]] += capacityRowSums[i] * (phi[i] - before[i]);
+      }
+    }
+    return added;
+  }
+
+  /** Sets the prescribed potentials of time t into phi. */
   public void applyPrescribed(double[] phi, double t) {
     for (Prescribed p : prescribed) {
       double c = p.condition().value().at(t);
@@ -377,12 +400,12 @@ public final class ThetaStepper {
       inflow[f.condition().group()] +=
           dt
               * f.area()
-              * (theta * f.condition().value().at(t1)
-                  + (1 - theta) * f.condition().value().at(t0));
+              * (theta * f.condition().value().at(t1) + (1 - theta) * f.condition().value().at(t0));
     }
     for (Exchange e : exchanges) {
       FaceCondition c = e.condition();
-      double in1 = c.coefficient().at(t1) * (c.value().at(t1) * e.area() - dot(e.massRowSums(), phi1));
+      double in1 =
+          c.coefficient().at(t1) * (c.value().at(t1) * e.area() - dot(e.massRowSums(), phi1));
       double in0 =
           theta < 1.0
               ? c.coefficient().at(t0) * (c.value().at(t0) * e.area() - dot(e.massRowSums(), phi0))

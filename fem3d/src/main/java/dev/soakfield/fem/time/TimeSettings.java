@@ -12,6 +12,7 @@ package dev.soakfield.fem.time;
  * @param initialStep first adaptive step, s
  * @param maxStep longest step, s
  */
+@SuppressWarnings("ArrayRecordComponent") // outputs is cloned in and out
 public record TimeSettings(
     double end,
     double[] outputs,

@@ -41,7 +41,8 @@ public final class TransientRun {
     Arrays.sort(outputs);
 
     double[] phi = phiStart.clone();
-    stepper.applyPrescribed(phi, 0.0);
+    double[] raised = stepper.raise(phi, 0.0);
+    listener.started(new StepOutcome(phi.clone(), raised, 0.0, stepper.amount(phi), 0));
     double scale = maxAbs(phi);
     double[] previous = null;
     double previousDt = 0;
@@ -88,12 +89,20 @@ public final class TransientRun {
         error = localError(previous, previousDt, phi, next, tryDt) / Math.max(scale, 1e-300);
         if (error > s.tolerance() && tryDt > minStep) {
           rejected++;
-          dt = ladder(ladderBase, tryDt * Math.max(SHRINK_LIMIT, 0.9 * Math.sqrt(s.tolerance() / error)));
+          dt =
+              ladder(
+                  ladderBase,
+                  tryDt * Math.max(SHRINK_LIMIT, 0.9 * Math.sqrt(s.tolerance() / error)));
           if (dt < minStep) {
             throw new RunFailedException(
                 t,
-                "the time step fell below " + minStep + " s at t = " + t + " s; the tolerance "
-                    + s.tolerance() + " cannot be met",
+                "the time step fell below "
+                    + minStep
+                    + " s at t = "
+                    + t
+                    + " s; the tolerance "
+                    + s.tolerance()
+                    + " cannot be met",
                 null);
           }
           continue;
@@ -113,7 +122,10 @@ public final class TransientRun {
       }
       if (s.adaptive()) {
         double grow =
-            error == 0 ? 2.0 : Math.min(GROWTH_LIMIT, Math.max(SHRINK_LIMIT, 0.9 * Math.sqrt(s.tolerance() / error)));
+            error == 0
+                ? 2.0
+                : Math.min(
+                    GROWTH_LIMIT, Math.max(SHRINK_LIMIT, 0.9 * Math.sqrt(s.tolerance() / error)));
         if (tryDt >= dt * 0.999) {
           dt = ladder(ladderBase, Math.min(s.maxStep(), dt * grow));
         }

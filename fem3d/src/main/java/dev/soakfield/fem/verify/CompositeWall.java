@@ -51,7 +51,8 @@ public final class CompositeWall {
                 "zmax", UniformModels.Condition.concentration(0.0)));
     ThetaStepper stepper = new ThetaStepper(model, false, 1e-13, 5000);
     double end = 400;
-    TimeSettings settings = new TimeSettings(end, new double[] {end}, false, 1e-4, Double.NaN, 1e-4, 20);
+    TimeSettings settings =
+        new TimeSettings(end, new double[] {end}, false, 1e-4, Double.NaN, 1e-4, 20);
     double[] phi0 = model.initialPhi();
     Recorder rec = new Recorder(stepper.amount(phi0));
     int zmin = mesh.faceGroupIndex("zmin");
@@ -70,14 +71,20 @@ public final class CompositeWall {
     double[] phi = rec.phiAt(end);
     int joint = PlaneSheet.nodeAt(mesh, 0, 0, LA);
     List<Check> checks = new ArrayList<>();
-    checks.add(new Check("composite wall, steady flux", SOURCE, flux, lastRate[0] / area, 1e-6, true));
     checks.add(
-        new Check("composite wall, c at joint in A", SOURCE, SA * phiJoint, SA * phi[joint], 1e-6, true));
+        new Check("composite wall, steady flux", SOURCE, flux, lastRate[0] / area, 1e-6, true));
     checks.add(
-        new Check("composite wall, c at joint in B", SOURCE, SB * phiJoint, SB * phi[joint], 1e-6, true));
+        new Check(
+            "composite wall, c at joint in A", SOURCE, SA * phiJoint, SA * phi[joint], 1e-6, true));
+    checks.add(
+        new Check(
+            "composite wall, c at joint in B", SOURCE, SB * phiJoint, SB * phi[joint], 1e-6, true));
     checks.add(
         Check.atMost(
-            "composite wall, global balance", "conservation (exact)", 1e-10, rec.balanceRelative()));
+            "composite wall, global balance",
+            "conservation (exact)",
+            1e-10,
+            rec.balanceRelative()));
     return checks;
   }
 }

@@ -10,9 +10,9 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Conservation with every kind of term at once: two materials of different solubility, an
- * exchange face, a flux face, a held face and a first-order sink. Whatever the accuracy, the
- * amount gained must equal what came in minus what the sink took, to solver precision.
+ * Conservation with every kind of term at once: two materials of different solubility, an exchange
+ * face, a flux face, a held face and a first-order sink. Whatever the accuracy, the amount gained
+ * must equal what came in minus what the sink took, to solver precision.
  */
 public final class ExchangeAndSink {
   private ExchangeAndSink() {}
@@ -25,7 +25,8 @@ public final class ExchangeAndSink {
             3,
             3,
             List.of(
-                new StructuredMesher.Layer("skin", 0.2, 2), new StructuredMesher.Layer("core", 0.8, 6)),
+                new StructuredMesher.Layer("skin", 0.2, 2),
+                new StructuredMesher.Layer("core", 0.8, 6)),
             1);
     DiffusionModel model =
         UniformModels.model(

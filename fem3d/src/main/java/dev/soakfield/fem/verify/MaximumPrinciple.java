@@ -12,9 +12,9 @@ import java.util.Map;
 /**
  * Lumped capacity with backward Euler on a mesh without obtuse dihedral angles satisfies the
  * discrete maximum principle for any step (H. Fujii, "Some remarks on finite element analysis of
- * time-dependent field problems", 1973; from memory): starting from zero with one face raised to
- * 1, no value may fall below zero, even for steps far shorter than h²/D, where the consistent
- * capacity is known to undershoot.
+ * time-dependent field problems", 1973; from memory): starting from zero with one face raised to 1,
+ * no value may fall below zero, even for steps far shorter than h²/D, where the consistent capacity
+ * is known to undershoot.
  */
 public final class MaximumPrinciple {
   private MaximumPrinciple() {}
@@ -31,7 +31,8 @@ public final class MaximumPrinciple {
             Map.of("xmin", UniformModels.Condition.concentration(1.0)));
     ThetaStepper stepper = new ThetaStepper(model, true, 1e-13, 5000);
     double dt = 1e-5;
-    TimeSettings settings = new TimeSettings(20 * dt, new double[] {20 * dt}, false, Double.NaN, dt, dt, dt);
+    TimeSettings settings =
+        new TimeSettings(20 * dt, new double[] {20 * dt}, false, Double.NaN, dt, dt, dt);
     double[] phi0 = model.initialPhi();
     Recorder rec = new Recorder(stepper.amount(phi0));
     TransientRun.run(stepper, phi0, settings, rec);
@@ -42,7 +43,9 @@ public final class MaximumPrinciple {
             1e-12,
             -rec.lowest()),
         Check.atMost(
-            "lumped backward Euler, global balance", "conservation (exact)", 1e-10,
+            "lumped backward Euler, global balance",
+            "conservation (exact)",
+            1e-10,
             rec.balanceRelative()));
   }
 }

@@ -65,7 +65,11 @@ public final class PlaneSheet {
       double computed = rec.uptakeAt(TAU[i] * L * L / D) / volume;
       checks.add(
           new Check(
-              label + ", uptake at Dt/L^2=" + TAU[i], UPTAKE_SOURCE, UPTAKE[i], computed, tolerance,
+              label + ", uptake at Dt/L^2=" + TAU[i],
+              UPTAKE_SOURCE,
+              UPTAKE[i],
+              computed,
+              tolerance,
               true));
     }
     double[] phi = rec.phiAt(CENTRE_TIME);

@@ -21,6 +21,11 @@ final class Recorder implements StepListener {
   }
 
   @Override
+  public void started(StepOutcome initial) {
+    accepted(0.0, 0.0, initial, false);
+  }
+
+  @Override
   public void accepted(double t, double dt, StepOutcome out, boolean output) {
     double inflow = 0;
     for (double v : out.faceInflow()) {

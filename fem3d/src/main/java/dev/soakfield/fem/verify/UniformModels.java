@@ -83,8 +83,7 @@ final class UniformModels {
         phi0[mesh.tetNode(t, k)] = c0 / sol[t];
       }
     }
-    return new DiffusionModel(
-        FeSpace.of(mesh), sol, tensor, rate, new double[tets], faces, phi0);
+    return new DiffusionModel(FeSpace.of(mesh), sol, tensor, rate, new double[tets], faces, phi0);
   }
 
   static double[] filled(int n, double v) {

@@ -3,7 +3,9 @@ package dev.soakfield.fem.verify;
 import java.util.ArrayList;
 import java.util.List;
 
-/** The built-in verification cases, on modest meshes, for {@code soakfield verify} and the tests. */
+/**
+ * The built-in verification cases, on modest meshes, for {@code soakfield verify} and the tests.
+ */
 public final class Verification {
   private Verification() {}
 

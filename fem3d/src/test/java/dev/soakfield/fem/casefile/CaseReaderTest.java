@@ -1,12 +1,12 @@
 package dev.soakfield.fem.casefile;
 
-import dev.soakfield.fem.physics.FaceKind;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.soakfield.fem.casefile.CaseInputException.Problem;
+import dev.soakfield.fem.physics.FaceKind;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
