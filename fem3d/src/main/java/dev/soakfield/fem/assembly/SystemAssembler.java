@@ -9,11 +9,12 @@ import java.util.Objects;
  * Assembles the matrices and vectors of the diffusion problem on a {@link FeSpace}: stiffness,
  * capacity (consistent or lumped), exchange-face mass, face and volume loads, and integrals.
  *
- * <p>The CSR pattern, a greedy colouring of the tetrahedra and the element-to-CSR position maps are
- * built once here. Tetrahedron terms are assembled colour by colour, each colour split over the
- * threads; since no two tetrahedra of a colour share a node, no locks are needed and every entry
- * receives its contributions in the same order whatever the number of threads, so results are
- * identical bit for bit. Instances are safe to use from one thread at a time.
+ * <p>The CSR pattern, a greedy colouring of blocks of consecutive tetrahedra and the element-to-CSR
+ * position maps are built once here. Tetrahedron terms are assembled colour by colour, the blocks
+ * of each colour split over the threads; since no two blocks of a colour share a node, no locks are
+ * needed and every entry receives its contributions in the same order whatever the number of
+ * threads, so results are identical bit for bit. Instances are safe to use from one thread at a
+ * time.
  */
 public final class SystemAssembler {
   /** Below this many tetrahedra one thread does all the work. */
@@ -21,7 +22,6 @@ public final class SystemAssembler {
 
   private final FeSpace space;
   private final int threads;
-  private final int minPart;
   private final CsrMatrix pattern;
   private final TetColouring colouring;
   private final int[] tetPos;
@@ -34,24 +34,25 @@ public final class SystemAssembler {
         Objects.requireNonNull(space, "space").mesh().tetCount() < PARALLEL_TETS
             ? 1
             : Runtime.getRuntime().availableProcessors(),
-        ParallelRanges.MIN_PART);
+        ParallelRanges.MIN_PART,
+        TetColouring.BLOCK);
   }
 
   /**
-   * With a given number of threads and smallest part per thread (tests compare one thread against
-   * several on small meshes).
+   * With a given number of threads, smallest part per thread (set-up loops) and tetrahedra per
+   * colouring block (tests compare one thread against several on small meshes).
    */
-  SystemAssembler(FeSpace space, int threads, int minPart) {
+  SystemAssembler(FeSpace space, int threads, int minPart, int blockSize) {
     this.space = Objects.requireNonNull(space, "space");
     if (threads < 1 || minPart < 1) {
       throw new IllegalArgumentException(
           "threads and minPart must be at least 1, got " + threads + " and " + minPart);
     }
     this.threads = threads;
-    this.minPart = minPart;
     checkOrientation(space);
     this.pattern = SparsityPattern.build(space, threads, minPart);
-    this.colouring = TetColouring.of(space.tetNodes(), space.nodesPerTet(), space.dofCount());
+    this.colouring =
+        TetColouring.of(space.tetNodes(), space.nodesPerTet(), space.dofCount(), blockSize);
     this.tetPos =
         ScatterMap.build(pattern, space.tetNodes(), space.nodesPerTet(), threads, minPart);
     this.facePos =
@@ -67,7 +68,7 @@ public final class SystemAssembler {
     return pattern.zeroCopy();
   }
 
-  /** Number of colours of the tetrahedron colouring (for reports). */
+  /** Number of colours of the block colouring (for reports). */
   int colourCount() {
     return colouring.colourCount();
   }
@@ -225,7 +226,6 @@ public final class SystemAssembler {
   }
 
   private void forEachTet(TetBody body) {
-    int[] order = colouring.order();
     int per = space.nodesPerTet();
     double[] xyz = space.coordinates();
     int[] conn = space.tetNodes();
@@ -234,15 +234,17 @@ public final class SystemAssembler {
           colouring.colourStart(c),
           colouring.colourStart(c + 1),
           threads,
-          minPart,
+          1,
           (from, to) -> {
             TetKernel kernel = TetKernel.forOrder(space.order());
             double[] x = new double[3 * per];
             double[] scratch = new double[per * per];
             for (int k = from; k < to; k++) {
-              int t = order[k];
-              FeSpace.gather(xyz, conn, t, per, x);
-              body.apply(kernel, t, x, scratch);
+              int b = colouring.block(k);
+              for (int t = colouring.firstTet(b); t < colouring.endTet(b); t++) {
+                FeSpace.gather(xyz, conn, t, per, x);
+                body.apply(kernel, t, x, scratch);
+              }
             }
           });
     }

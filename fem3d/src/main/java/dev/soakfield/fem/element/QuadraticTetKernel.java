@@ -16,10 +16,36 @@ final class QuadraticTetKernel implements TetKernel {
   private static final double[] MASS_DN = referenceGradients(MASS_RULE);
   private static final double[] MASS_N = values(MASS_RULE);
 
+  /**
+   * On straight-edged tetrahedra ∇N_i = Σ_a (∂N_i/∂L_a) ∇L_a with constant ∇L_a, so K_ij = V Σ_a≤b
+   * G_ab S_ab,ij with G_ab = ∇L_a · T ∇L_b and reference numbers S (the degree-2 rule is exact for
+   * them); mass and load are V times reference arrays. About five times fewer operations than the
+   * isoparametric path, which curved tetrahedra still take.
+   */
+  private static final StraightTables STRAIGHT = new StraightTables();
+
+  /**
+   * Mid-edge nodes within this fraction of their edge's length of the midpoint count as straight.
+   */
+  private static final double STRAIGHT_TOLERANCE = 1e-12;
+
+  /** False in tests only, to compare the isoparametric path against the shortcut. */
+  private final boolean shortcut;
+
+  private final double[] lgrad = new double[12];
+  private final double[] gab = new double[10];
   private final double[] jinv = new double[9];
   private final double[] grad = new double[30];
   private final double[] flux = new double[30];
   private final double[] diag = new double[100];
+
+  QuadraticTetKernel() {
+    this(true);
+  }
+
+  QuadraticTetKernel(boolean shortcut) {
+    this.shortcut = shortcut;
+  }
 
   @Override
   public int nodeCount() {
@@ -28,6 +54,10 @@ final class QuadraticTetKernel implements TetKernel {
 
   @Override
   public void stiffness(double[] x, double[] tensor, int off, double[] out) {
+    if (shortcut && isStraight(x)) {
+      straightStiffness(x, tensor, off, out);
+      return;
+    }
     double txx = tensor[off];
     double tyy = tensor[off + 1];
     double tzz = tensor[off + 2];
@@ -69,6 +99,13 @@ final class QuadraticTetKernel implements TetKernel {
 
   @Override
   public void mass(double[] x, double[] out) {
+    if (shortcut && isStraight(x)) {
+      double v = LinearTetKernel.signedVolume(x);
+      for (int k = 0; k < 100; k++) {
+        out[k] = v * STRAIGHT.mass[k];
+      }
+      return;
+    }
     for (int k = 0; k < 100; k++) {
       out[k] = 0;
     }
@@ -91,6 +128,13 @@ final class QuadraticTetKernel implements TetKernel {
     // all consistent entries, which is the volume). E. Hinton, T. Rock, O. C. Zienkiewicz, "A note
     // on mass lumping and related processes in the finite element method", Earthquake Eng. Struct.
     // Dyn. 4 (1976) 245. Row sums would give negative corner masses (−V/20).
+    if (shortcut && isStraight(x)) {
+      double v = LinearTetKernel.signedVolume(x);
+      for (int i = 0; i < 10; i++) {
+        out[i] = v * STRAIGHT.lumped[i];
+      }
+      return;
+    }
     mass(x, diag);
     double total = 0;
     double trace = 0;
@@ -108,6 +152,13 @@ final class QuadraticTetKernel implements TetKernel {
 
   @Override
   public void load(double[] x, double[] out) {
+    if (shortcut && isStraight(x)) {
+      double v = LinearTetKernel.signedVolume(x);
+      for (int i = 0; i < 10; i++) {
+        out[i] = v * STRAIGHT.load[i];
+      }
+      return;
+    }
     for (int i = 0; i < 10; i++) {
       out[i] = 0;
     }
@@ -127,6 +178,148 @@ final class QuadraticTetKernel implements TetKernel {
       v += MASS_RULE.weight(q) * jacobianDeterminant(x, MASS_DN, 30 * q);
     }
     return v / 6;
+  }
+
+  private void straightStiffness(double[] x, double[] tensor, int off, double[] out) {
+    double v = LinearTetKernel.gradients(x, lgrad);
+    double txx = tensor[off];
+    double tyy = tensor[off + 1];
+    double tzz = tensor[off + 2];
+    double txy = tensor[off + 3];
+    double tyz = tensor[off + 4];
+    double tzx = tensor[off + 5];
+    int p = 0;
+    for (int a = 0; a < 4; a++) {
+      double gx = lgrad[3 * a];
+      double gy = lgrad[3 * a + 1];
+      double gz = lgrad[3 * a + 2];
+      double fx = v * (txx * gx + txy * gy + tzx * gz);
+      double fy = v * (txy * gx + tyy * gy + tyz * gz);
+      double fz = v * (tzx * gx + tyz * gy + tzz * gz);
+      for (int b = a; b < 4; b++) {
+        gab[p++] = lgrad[3 * b] * fx + lgrad[3 * b + 1] * fy + lgrad[3 * b + 2] * fz;
+      }
+    }
+    double[] sab = STRAIGHT.stiffness;
+    int e = 0;
+    for (int i = 0; i < 10; i++) {
+      for (int j = i; j < 10; j++) {
+        double k = 0;
+        int base = 10 * e;
+        for (int q = 0; q < 10; q++) {
+          k += gab[q] * sab[base + q];
+        }
+        out[10 * i + j] = k;
+        e++;
+      }
+    }
+    mirrorUpper(out);
+  }
+
+  /** True when every mid-edge node sits at its edge's midpoint (within rounding). */
+  private static boolean isStraight(double[] x) {
+    for (int e = 0; e < 6; e++) {
+      int a = 3 * TetBasis.edgeStart(e);
+      int b = 3 * TetBasis.edgeEnd(e);
+      int m = 3 * (4 + e);
+      double len2 = 0;
+      double dev2 = 0;
+      for (int k = 0; k < 3; k++) {
+        double d = x[b + k] - x[a + k];
+        double off = x[m + k] - 0.5 * (x[a + k] + x[b + k]);
+        len2 += d * d;
+        dev2 += off * off;
+      }
+      if (dev2 > STRAIGHT_TOLERANCE * STRAIGHT_TOLERANCE * len2) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  /** Reference numbers of the straight-edged 10-node tetrahedron, per unit volume. */
+  private static final class StraightTables {
+    /** [pair (a ≤ b) fastest, then upper-triangle entry (i ≤ j)]: S_ab,ij, 55 × 10 numbers. */
+    final double[] stiffness = new double[550];
+
+    final double[] mass = new double[100];
+    final double[] lumped = new double[10];
+    final double[] load = new double[10];
+
+    StraightTables() {
+      double[] l = new double[4];
+      double[] n = new double[10];
+      // dN_i/dL_a with the four L independent (a degree-1 polynomial in L)
+      double[] d = new double[40];
+      double[][] r = new double[16][100];
+      TetQuadrature rule = TetQuadrature.DEGREE_2;
+      for (int q = 0; q < rule.size(); q++) {
+        for (int a = 0; a < 4; a++) {
+          l[a] = rule.bary(q, a);
+        }
+        baryDerivatives(l, d);
+        for (int a = 0; a < 4; a++) {
+          for (int b = 0; b < 4; b++) {
+            for (int i = 0; i < 10; i++) {
+              for (int j = 0; j < 10; j++) {
+                r[4 * a + b][10 * i + j] += rule.weight(q) * d[4 * i + a] * d[4 * j + b];
+              }
+            }
+          }
+        }
+      }
+      int e = 0;
+      for (int i = 0; i < 10; i++) {
+        for (int j = i; j < 10; j++) {
+          int p = 0;
+          for (int a = 0; a < 4; a++) {
+            for (int b = a; b < 4; b++) {
+              double s = r[4 * a + b][10 * i + j];
+              if (b != a) {
+                s += r[4 * b + a][10 * i + j];
+              }
+              stiffness[10 * e + p++] = s;
+            }
+          }
+          e++;
+        }
+      }
+      TetQuadrature mrule = TetQuadrature.DEGREE_5;
+      for (int q = 0; q < mrule.size(); q++) {
+        for (int a = 0; a < 4; a++) {
+          l[a] = mrule.bary(q, a);
+        }
+        TetBasis.values(2, l, n);
+        for (int i = 0; i < 10; i++) {
+          load[i] += mrule.weight(q) * n[i];
+          for (int j = 0; j < 10; j++) {
+            mass[10 * i + j] += mrule.weight(q) * n[i] * n[j];
+          }
+        }
+      }
+      double trace = 0;
+      for (int i = 0; i < 10; i++) {
+        trace += mass[11 * i];
+      }
+      for (int i = 0; i < 10; i++) {
+        lumped[i] = mass[11 * i] / trace; // HRZ: the diagonal scaled to a total of one volume
+      }
+    }
+
+    private static void baryDerivatives(double[] l, double[] d) {
+      for (int k = 0; k < 40; k++) {
+        d[k] = 0;
+      }
+      for (int a = 0; a < 4; a++) {
+        d[4 * a + a] = 4 * l[a] - 1;
+      }
+      for (int e = 0; e < 6; e++) {
+        int a = TetBasis.edgeStart(e);
+        int b = TetBasis.edgeEnd(e);
+        d[4 * (4 + e) + a] = 4 * l[b];
+        d[4 * (4 + e) + b] = 4 * l[a];
+      }
+    }
   }
 
   private static void mirrorUpper(double[] out) {

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.soakfield.fem.element.TetKernel;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.gen.StructuredMesher;
+import java.util.Arrays;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
@@ -26,8 +27,8 @@ class ParallelAssemblyTest {
   void severalThreadsGiveTheSameBitsAsOne(int order) {
     TetMesh mesh = StructuredMesher.box(1, 1, 1, 6, 5, 4, order);
     FeSpace space = FeSpace.of(mesh);
-    SystemAssembler serial = new SystemAssembler(space, 1, 1);
-    SystemAssembler parallel = new SystemAssembler(space, 3, 4);
+    SystemAssembler serial = new SystemAssembler(space, 1, 1, 5);
+    SystemAssembler parallel = new SystemAssembler(space, 3, 4, 5);
     assertArrayEquals(serial.newMatrix().cols(), parallel.newMatrix().cols());
     double[] tensor = TestMeshes.uniformTensor(mesh, T);
     double[] coef = coefficients(mesh);
@@ -54,7 +55,7 @@ class ParallelAssemblyTest {
   void colouredAssemblyMatchesAPlainElementLoop(int order) {
     TetMesh mesh = StructuredMesher.box(1, 1, 1, 4, 4, 3, order);
     FeSpace space = FeSpace.of(mesh);
-    SystemAssembler a = new SystemAssembler(space, 2, 4);
+    SystemAssembler a = new SystemAssembler(space, 2, 4, 3);
     CsrMatrix k = a.newMatrix();
     double[] tensor = TestMeshes.uniformTensor(mesh, T);
     a.addStiffness(k, tensor, 1.0);
@@ -84,25 +85,38 @@ class ParallelAssemblyTest {
 
   @ParameterizedTest
   @ValueSource(ints = {1, 2})
-  void noTwoTetrahedraOfOneColourShareANode(int order) {
+  void noTwoBlocksOfOneColourShareANode(int order) {
     TetMesh mesh = StructuredMesher.box(1, 1, 1, 4, 3, 3, order);
     int per = mesh.nodesPerTet();
-    TetColouring colouring = TetColouring.of(mesh.copyTets(), per, mesh.nodeCount());
-    assertEquals(mesh.tetCount(), colouring.order().length);
+    TetColouring colouring = TetColouring.of(mesh.copyTets(), per, mesh.nodeCount(), 7);
     int[] lastColour = new int[mesh.nodeCount()];
-    java.util.Arrays.fill(lastColour, -1);
+    int[] lastBlock = new int[mesh.nodeCount()];
+    Arrays.fill(lastColour, -1);
     boolean[] seen = new boolean[mesh.tetCount()];
+    int blocks = 0;
     for (int c = 0; c < colouring.colourCount(); c++) {
       for (int k = colouring.colourStart(c); k < colouring.colourStart(c + 1); k++) {
-        int t = colouring.order()[k];
-        assertTrue(!seen[t], "tet listed twice");
-        seen[t] = true;
-        for (int i = 0; i < per; i++) {
-          int node = mesh.tetNode(t, i);
-          assertTrue(lastColour[node] != c, "colour " + c + " shares node " + node);
-          lastColour[node] = c;
+        int b = colouring.block(k);
+        blocks++;
+        for (int t = colouring.firstTet(b); t < colouring.endTet(b); t++) {
+          assertTrue(!seen[t], "tet listed twice");
+          seen[t] = true;
+          for (int i = 0; i < per; i++) {
+            int node = mesh.tetNode(t, i);
+            assertTrue(
+                lastColour[node] != c || lastBlock[node] == b,
+                "colour " + c + " has two blocks on node " + node);
+            lastColour[node] = c;
+            lastBlock[node] = b;
+          }
         }
       }
     }
+    // 216 tets in blocks of 7; every tet listed once
+    assertEquals((mesh.tetCount() + 6) / 7, blocks);
+    for (boolean s : seen) {
+      assertTrue(s);
+    }
+    assertTrue(colouring.colourCount() > 1);
   }
 }
