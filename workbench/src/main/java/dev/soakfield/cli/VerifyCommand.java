@@ -23,13 +23,22 @@ import picocli.CommandLine.Spec;
 final class VerifyCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
+  private static String reference(Check c) {
+    String v = String.format(Locale.ROOT, "%.7g", c.reference());
+    return switch (c.mode()) {
+      case NEAR -> v;
+      case AT_MOST -> "<= " + v;
+      case AT_LEAST -> ">= " + v;
+    };
+  }
+
   @Override
   public Integer call() {
     List<Check> checks = Verification.all();
     PrintWriter out = spec.commandLine().getOut();
     out.printf(
         Locale.ROOT,
-        "%-62s %-52s %12s %12s %10s %s%n",
+        "%-62s %-52s %14s %12s %10s %s%n",
         "case",
         "source",
         "reference",
@@ -40,10 +49,10 @@ final class VerifyCommand implements Callable<Integer> {
     for (Check c : checks) {
       out.printf(
           Locale.ROOT,
-          "%-62s %-52s %12.7g %12.7g %10.2e %s%n",
+          "%-62s %-52s %14s %12.7g %10.2e %s%n",
           c.caseName(),
           c.source(),
-          c.reference(),
+          reference(c),
           c.computed(),
           c.error(),
           c.passed() ? "pass" : "FAIL");

@@ -42,6 +42,11 @@ public final class ResultFolder {
 
   /** Moves the finished results into place, replacing an earlier run's folder. */
   public void commit() throws IOException {
+    if (work.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+      // a temporary folder is private to its owner; results are for everyone who may read here
+      Files.setPosixFilePermissions(
+          work, java.nio.file.attribute.PosixFilePermissions.fromString("rwxr-xr-x"));
+    }
     Path old = null;
     if (Files.exists(target)) {
       old = target.resolveSibling("." + target.getFileName() + ".old-" + System.nanoTime());

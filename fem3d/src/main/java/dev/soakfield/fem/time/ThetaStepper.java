@@ -40,6 +40,9 @@ public final class ThetaStepper {
   private final CsrMatrix system;
   private final CsrMatrix unreduced; // the same system before elimination, for the reactions
   private final int[] eliminated; // CSR positions in free rows whose column is prescribed
+  // Held rows keep their own diagonal (x_i = φ_D scaled by it), so they do not dominate ‖b‖ and the
+  // solver's relative tolerance stays meaningful for the free rows.
+  private final double[] heldDiagonal;
   private double systemDt = Double.NaN;
   private double systemTheta = Double.NaN;
   private double[] systemH = new double[0];
@@ -128,6 +131,7 @@ public final class ThetaStepper {
     system = capacity.zeroCopy();
     unreduced = capacity.zeroCopy();
     eliminated = eliminatedPositions();
+    heldDiagonal = new double[n];
     solver = new PcgSolver(solverTolerance, maxIterations, PreconditionerKind.AUTO);
   }
 
@@ -313,7 +317,11 @@ public final class ThetaStepper {
     for (int i = 0; i < system.size(); i++) {
       if (isPrescribed[i]) {
         for (int k = rs[i]; k < rs[i + 1]; k++) {
-          a[k] = cols[k] == i ? 1.0 : 0.0;
+          if (cols[k] == i) {
+            heldDiagonal[i] = a[k];
+          } else {
+            a[k] = 0.0;
+          }
         }
       }
     }
@@ -382,7 +390,7 @@ public final class ThetaStepper {
       unreduced.multiply(phiD, aDphiD);
     }
     for (int i = 0; i < n; i++) {
-      rhs[i] = isPrescribed[i] ? phi1[i] : rhs[i] - aDphiD[i];
+      rhs[i] = isPrescribed[i] ? heldDiagonal[i] * phi1[i] : rhs[i] - aDphiD[i];
     }
     int iterations = solver.solve(rhs, phi1).iterations();
 

@@ -56,10 +56,10 @@ public final class TransientRun {
     double minStep = end * 1e-14;
     while (t < end) {
       double target = targets.ceiling(t + minStep);
-      double tryDt = Math.min(dt, target - t);
-      if (target - t - tryDt < 0.25 * tryDt) {
-        tryDt = target - t; // do not leave a sliver before the target
-      }
+      double remaining = target - t;
+      // never longer than dt (so a rejection always shortens the try), and no sliver before the
+      // target: a remainder up to 1.25 dt is taken in two equal steps
+      double tryDt = remaining <= dt ? remaining : remaining <= 1.25 * dt ? remaining / 2 : dt;
       boolean crank = s.crankNicolson() && sinceRestart >= TimeSettings.START_STEPS;
       StepOutcome out;
       try {

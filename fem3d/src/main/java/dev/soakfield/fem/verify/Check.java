@@ -5,10 +5,12 @@ package dev.soakfield.fem.verify;
  *
  * @param caseName what was run
  * @param source where the reference value comes from
- * @param reference the reference value
+ * @param reference the reference value, or the bound for {@link Mode#AT_MOST}/{@link Mode#AT_LEAST}
  * @param computed what Soakfield computed
- * @param tolerance the allowed error; relative to the reference when {@code relative}
+ * @param tolerance the allowed error for {@link Mode#NEAR}; relative to the reference when {@code
+ *     relative}
  * @param relative whether the tolerance is relative
+ * @param mode how computed is held against reference
  */
 public record Check(
     String caseName,
@@ -16,19 +18,56 @@ public record Check(
     double reference,
     double computed,
     double tolerance,
-    boolean relative) {
-  /** The error: relative to the reference, or absolute. */
+    boolean relative,
+    Mode mode) {
+  /** How a check passes. */
+  public enum Mode {
+    /** computed within tolerance of reference */
+    NEAR,
+    /** computed at most reference */
+    AT_MOST,
+    /** computed at least reference */
+    AT_LEAST
+  }
+
+  /** A check that computed lies within tolerance of reference. */
+  public Check(
+      String caseName,
+      String source,
+      double reference,
+      double computed,
+      double tolerance,
+      boolean relative) {
+    this(caseName, source, reference, computed, tolerance, relative, Mode.NEAR);
+  }
+
+  /** The error: relative to the reference, or absolute; for bounds, how far past it (or 0). */
   public double error() {
-    double e = Math.abs(computed - reference);
-    return relative ? e / Math.abs(reference) : e;
+    return switch (mode) {
+      case NEAR -> {
+        double e = Math.abs(computed - reference);
+        yield relative ? e / Math.abs(reference) : e;
+      }
+      case AT_MOST -> Math.max(0, computed - reference);
+      case AT_LEAST -> Math.max(0, reference - computed);
+    };
   }
 
   public boolean passed() {
-    return error() <= tolerance;
+    return switch (mode) {
+      case NEAR -> error() <= tolerance;
+      case AT_MOST -> computed <= reference;
+      case AT_LEAST -> computed >= reference;
+    };
   }
 
-  /** A check that the computed value is at most the bound (reference = the bound). */
+  /** A check that the computed value is at most the bound. */
   public static Check atMost(String caseName, String source, double bound, double computed) {
-    return new Check(caseName, source, 0.0, Math.max(computed, 0.0), bound, false);
+    return new Check(caseName, source, bound, computed, 0, false, Mode.AT_MOST);
+  }
+
+  /** A check that the computed value is at least the bound. */
+  public static Check atLeast(String caseName, String source, double bound, double computed) {
+    return new Check(caseName, source, bound, computed, 0, false, Mode.AT_LEAST);
   }
 }

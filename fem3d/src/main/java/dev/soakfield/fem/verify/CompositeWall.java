@@ -1,6 +1,8 @@
 package dev.soakfield.fem.verify;
 
 import dev.soakfield.fem.physics.DiffusionModel;
+import dev.soakfield.fem.time.StepListener;
+import dev.soakfield.fem.time.StepOutcome;
 import dev.soakfield.fem.time.ThetaStepper;
 import dev.soakfield.fem.time.TimeSettings;
 import dev.soakfield.fem.time.TransientRun;
@@ -61,9 +63,17 @@ public final class CompositeWall {
         stepper,
         phi0,
         settings,
-        (t, dt, out, output) -> {
-          rec.accepted(t, dt, out, output);
-          lastRate[0] = out.faceInflow()[zmin] / dt;
+        new StepListener() {
+          @Override
+          public void started(StepOutcome initial) {
+            rec.started(initial);
+          }
+
+          @Override
+          public void accepted(double t, double dt, StepOutcome out, boolean output) {
+            rec.accepted(t, dt, out, output);
+            lastRate[0] = out.faceInflow()[zmin] / dt;
+          }
         });
     double area = 0.1 * 0.1;
     double flux = C0 / SA / (LA / (DA * SA) + LB / (DB * SB));

@@ -1,0 +1,78 @@
+package dev.soakfield.fem.verify;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The built-in verification cases; each reference value and its source (Crank 1975, Brenner &
+ * Scott, exact conservation, the discrete maximum principle) is named where the case defines it.
+ */
+class VerificationTest {
+  private static void assertAllPass(List<Check> checks) {
+    for (Check c : checks) {
+      assertTrue(
+          c.passed(),
+          c.caseName()
+              + " ["
+              + c.source()
+              + "]: computed "
+              + c.computed()
+              + ", reference "
+              + c.reference()
+              + ", error "
+              + c.error());
+    }
+  }
+
+  @Test
+  void quadraticPlaneSheetMatchesCrankWithinATenthOfAPercent() {
+    List<Check> checks = PlaneSheet.run(2, 40, 2.5e-4, 1e-3);
+    assertEquals(7, checks.size()); // five uptakes, the centre value, the balance
+    assertAllPass(checks);
+  }
+
+  @Test
+  void linearPlaneSheetMatchesCrankWithinOnePercent() {
+    assertAllPass(PlaneSheet.run(1, 80, 2.5e-4, 1e-2));
+  }
+
+  @Test
+  void compositeWallHasContinuousPotentialAndJumpingConcentration() {
+    List<Check> checks = CompositeWall.run();
+    assertAllPass(checks);
+    // c jumps by the solubility ratio S_B / S_A = 3 at the joint
+    assertEquals(3.0, checks.get(2).computed() / checks.get(1).computed(), 1e-9);
+  }
+
+  @Test
+  void lumpedBackwardEulerKeepsTheMaximumPrinciple() {
+    assertAllPass(MaximumPrinciple.run());
+  }
+
+  @Test
+  void balanceClosesWithEveryKindOfTerm() {
+    assertAllPass(ExchangeAndSink.run(false));
+    assertAllPass(ExchangeAndSink.run(true));
+  }
+
+  @Test
+  void spatialAndTemporalRatesReachTheirOrders() {
+    assertAllPass(
+        List.of(
+            DecayingMode.spatialRate(1, 8, 1.9),
+            DecayingMode.spatialRate(2, 4, 2.9),
+            DecayingMode.temporalRate(false, 0.9),
+            DecayingMode.temporalRate(true, 1.9)));
+  }
+
+  @Test
+  void checksFailWhenTheyShould() {
+    assertTrue(!new Check("x", "s", 1.0, 1.1, 0.05, true).passed());
+    assertTrue(!Check.atMost("x", "s", 1e-10, 1e-9).passed());
+    assertTrue(!Check.atLeast("x", "s", 1.9, 1.5).passed());
+    assertEquals(0.1, new Check("x", "s", 1.0, 1.1, 0.05, true).error(), 1e-12);
+  }
+}
