@@ -9,7 +9,7 @@ import picocli.CommandLine.Spec;
     name = "bench",
     mixinStandardHelpOptions = true,
     description = "Measures speed against a reference in the same run and prints ratios.",
-    subcommands = {MeshImportBench.class, SolverBenchCommand.class})
+    subcommands = {MeshImportBench.class, SolverBenchCommand.class, RunBenchCommand.class})
 final class BenchCommand implements Runnable {
   @Spec CommandSpec spec;
 

@@ -176,7 +176,11 @@ class MeshAndInfoCommandTest {
           {"mesh", "cylinder", "--help"},
           {"mesh", "pipe", "--help"},
           {"info", "--help"},
-          {"bench", "mesh-import", "--help"}
+          {"bench", "mesh-import", "--help"},
+          {"bench", "solver", "--help"},
+          {"run", "--help"},
+          {"demo", "--help"},
+          {"verify", "--help"}
         }) {
       CliRun r = CliRun.of(cmd);
       assertEquals(0, r.exitCode(), String.join(" ", cmd));

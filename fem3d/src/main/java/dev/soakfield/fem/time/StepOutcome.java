@@ -9,7 +9,13 @@ package dev.soakfield.fem.time;
  * @param sourceAmount amount produced by volume sources during the step (negative for sinks)
  * @param amount the total amount at the end of the step, 1ᵀ M φ
  * @param iterations linear solver iterations of the step
+ * @param solveSeconds time spent in the linear solve (and any preconditioner set-up)
  */
 @SuppressWarnings("ArrayRecordComponent") // handed from the stepper to listeners, read only
 public record StepOutcome(
-    double[] phi, double[] faceInflow, double sourceAmount, double amount, int iterations) {}
+    double[] phi,
+    double[] faceInflow,
+    double sourceAmount,
+    double amount,
+    int iterations,
+    double solveSeconds) {}

@@ -377,6 +377,7 @@ public final class ThetaStepper {
 
     double[] phi1 = phi0.clone();
     applyPrescribed(phi1, t1);
+    long solveStart = System.nanoTime();
     prepareSystem(dt, theta, t1);
     // symmetric elimination: move prescribed columns to the right-hand side
     double[] phiD = new double[n];
@@ -393,6 +394,7 @@ public final class ThetaStepper {
       rhs[i] = isPrescribed[i] ? heldDiagonal[i] * phi1[i] : rhs[i] - aDphiD[i];
     }
     int iterations = solver.solve(rhs, phi1).iterations();
+    double solveSeconds = (System.nanoTime() - solveStart) * 1e-9;
 
     double[] inflow = new double[faceGroupCount];
     if (!prescribed.isEmpty()) {
@@ -424,6 +426,6 @@ public final class ThetaStepper {
     if (model.hasFirstOrderSource()) {
       source += dt * (theta * dot(sinkRowSums, phi1) + (1 - theta) * dot(sinkRowSums, phi0));
     }
-    return new StepOutcome(phi1, inflow, source, amount(phi1), iterations);
+    return new StepOutcome(phi1, inflow, source, amount(phi1), iterations, solveSeconds);
   }
 }

@@ -42,7 +42,7 @@ public final class TransientRun {
 
     double[] phi = phiStart.clone();
     double[] raised = stepper.raise(phi, 0.0);
-    listener.started(new StepOutcome(phi.clone(), raised, 0.0, stepper.amount(phi), 0));
+    listener.started(new StepOutcome(phi.clone(), raised, 0.0, stepper.amount(phi), 0, 0.0));
     double scale = maxAbs(phi);
     double[] previous = null;
     double previousDt = 0;

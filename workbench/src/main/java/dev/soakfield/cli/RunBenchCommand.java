@@ -1,0 +1,43 @@
+package dev.soakfield.cli;
+
+import dev.soakfield.fem.run.RunBench;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code soakfield bench run}: a whole transient run against its pure solve time. */
+@Command(
+    name = "run",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Times a transient run on a box of 6*N^3 linear tetrahedra (N = 63: 1.5M) with fixed"
+          + " backward-Euler steps, against the time of its linear solves, and reports the peak"
+          + " heap per tetrahedron. Give the JVM heap with SOAKFIELD_JAVA_OPTS=-Xmx..."
+    })
+final class RunBenchCommand implements Callable<Integer> {
+  @Spec CommandSpec spec;
+
+  @Option(names = "--cells", defaultValue = "63", description = "Cells per axis (default 63).")
+  int cells;
+
+  @Option(names = "--steps", defaultValue = "100", description = "Steps (default 100).")
+  int steps;
+
+  @Option(
+      names = "--ratio",
+      defaultValue = "1",
+      description = "Step length as dt*D/h^2 (default 1).")
+  double ratio;
+
+  @Override
+  public Integer call() {
+    if (cells < 2 || steps < 1 || !(ratio > 0)) {
+      throw new UserInputException(
+          "--cells at least 2, --steps at least 1 and --ratio positive expected");
+    }
+    RunBench.run(spec.commandLine().getOut(), cells, steps, ratio);
+    return ExitCodes.OK;
+  }
+}

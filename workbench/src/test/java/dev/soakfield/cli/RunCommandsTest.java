@@ -1,0 +1,60 @@
+package dev.soakfield.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class RunCommandsTest {
+  @TempDir Path dir;
+
+  @Test
+  void demoRunsTheBundledCaseAndClosesItsBalance() throws Exception {
+    CliRun r = CliRun.of("demo", "--out", dir.resolve("demo").toString());
+    assertEquals(0, r.exitCode(), r.err());
+    assertTrue(r.out().contains("results in"), r.out());
+    assertTrue(r.out().contains("caution:"), r.out());
+    Path results = dir.resolve("demo/results");
+    JsonNode summary = new ObjectMapper().readTree(results.resolve("summary.json").toFile());
+    // conservation is exact for linear elements up to solver round-off (common practice: 1e-10)
+    assertTrue(summary.get("balance").get("relative").asDouble() < 1e-10, summary.toString());
+    assertTrue(Files.readAllLines(results.resolve("series.csv")).size() > 10);
+  }
+
+  @Test
+  void aMisspelledKeyIsBadInputWithItsLine() throws Exception {
+    Path mesh = dir.resolve("b.msh");
+    assertEquals(
+        0,
+        CliRun.of("mesh", "box", "--size", "1,1,1", "--cells", "2,2,2", "--out", mesh.toString())
+            .exitCode());
+    Path c =
+        Files.writeString(
+            dir.resolve("c.json"),
+            """
+            { "mesh": "b.msh",
+              "materials": { "body": { "difusivity": 1e-9 } },
+              "time": { "end": 10 } }
+            """);
+    CliRun r = CliRun.of("run", c.toString(), "--out", dir.resolve("out").toString());
+    assertEquals(ExitCodes.BAD_INPUT, r.exitCode());
+    assertTrue(r.err().contains("line 2"), r.err());
+    assertTrue(r.err().contains("diffusivity"), r.err());
+    assertFalse(r.err().contains("at dev.soakfield"), r.err());
+    assertFalse(Files.exists(dir.resolve("out")));
+  }
+
+  @Test
+  void verifyPassesEveryCheck() {
+    CliRun r = CliRun.of("verify");
+    assertEquals(0, r.exitCode(), r.out());
+    assertTrue(r.out().contains("Crank (1975)"), r.out());
+    assertTrue(r.out().contains(" 0 failed"), r.out());
+  }
+}
