@@ -7,6 +7,7 @@ import dev.soakfield.fem.casefile.MaterialSpec;
 import dev.soakfield.fem.casefile.SourceSpec;
 import dev.soakfield.fem.physics.DiffusionModel;
 import dev.soakfield.fem.physics.FaceCondition;
+import dev.soakfield.fem.physics.FaceGroupMembers;
 import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.physics.FaceOwners;
 import dev.soakfield.mesh.TetMesh;
@@ -57,7 +58,7 @@ public final class ModelBuilder {
         continue;
       }
       int g = mesh.faceGroupIndex(f.faceGroup());
-      int[] members = facesOf(mesh, g);
+      int[] members = FaceGroupMembers.of(mesh, g);
       double[] faceS = new double[members.length];
       for (int i = 0; i < members.length; i++) {
         faceS[i] = solubility[owner[members[i]]];
@@ -90,22 +91,5 @@ public final class ModelBuilder {
     }
     return new DiffusionModel(
         FeSpace.of(mesh), solubility, conductance, firstOrder, constant, faces, phi0);
-  }
-
-  private static int[] facesOf(TetMesh mesh, int group) {
-    int count = 0;
-    for (int f = 0; f < mesh.faceCount(); f++) {
-      if (mesh.faceGroup(f) == group) {
-        count++;
-      }
-    }
-    int[] out = new int[count];
-    int p = 0;
-    for (int f = 0; f < mesh.faceCount(); f++) {
-      if (mesh.faceGroup(f) == group) {
-        out[p++] = f;
-      }
-    }
-    return out;
   }
 }

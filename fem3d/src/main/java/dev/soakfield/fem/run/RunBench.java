@@ -3,6 +3,7 @@ package dev.soakfield.fem.run;
 import dev.soakfield.fem.assembly.FeSpace;
 import dev.soakfield.fem.physics.DiffusionModel;
 import dev.soakfield.fem.physics.FaceCondition;
+import dev.soakfield.fem.physics.FaceGroupMembers;
 import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.physics.TimeFunction;
 import dev.soakfield.fem.time.StepListener;
@@ -41,10 +42,7 @@ public final class RunBench {
       tensor[6 * t + 2] = 1;
     }
     int g = mesh.faceGroupIndex("xmin");
-    int[] faces =
-        java.util.stream.IntStream.range(0, mesh.faceCount())
-            .filter(f -> mesh.faceGroup(f) == g)
-            .toArray();
+    int[] faces = FaceGroupMembers.of(mesh, g);
     double[] faceS = new double[faces.length];
     Arrays.fill(faceS, 1.0);
     DiffusionModel model =

@@ -5,6 +5,7 @@ import dev.soakfield.fem.element.TetBasis;
 import dev.soakfield.fem.element.TetQuadrature;
 import dev.soakfield.fem.physics.DiffusionModel;
 import dev.soakfield.fem.physics.FaceCondition;
+import dev.soakfield.fem.physics.FaceGroupMembers;
 import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.physics.TimeFunction;
 import dev.soakfield.fem.time.ThetaStepper;
@@ -12,6 +13,7 @@ import dev.soakfield.fem.time.TimeSettings;
 import dev.soakfield.fem.time.TransientRun;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.gen.StructuredMesher;
+import dev.soakfield.mesh.topo.MeshGeometry;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -49,11 +51,7 @@ public final class DecayingMode {
     }
     List<FaceCondition> faces = new ArrayList<>();
     for (int g = 0; g < mesh.faceGroups().size(); g++) {
-      final int group = g;
-      int[] members =
-          java.util.stream.IntStream.range(0, mesh.faceCount())
-              .filter(f -> mesh.faceGroup(f) == group)
-              .toArray();
+      int[] members = FaceGroupMembers.of(mesh, g);
       faces.add(
           new FaceCondition(
               g,
@@ -89,7 +87,7 @@ public final class DecayingMode {
     double[] n = new double[per];
     double sum = 0;
     for (int e = 0; e < mesh.tetCount(); e++) {
-      double vol = Math.abs(volume(mesh, e));
+      double vol = Math.abs(MeshGeometry.tetVolume(mesh, e));
       for (int k = 0; k < q.size(); k++) {
         double x = 0;
         double y = 0;
@@ -111,27 +109,6 @@ public final class DecayingMode {
       }
     }
     return Math.sqrt(sum);
-  }
-
-  private static double volume(TetMesh m, int e) {
-    double[][] p = new double[4][3];
-    for (int a = 0; a < 4; a++) {
-      for (int c = 0; c < 3; c++) {
-        p[a][c] = m.coord(m.tetNode(e, a), c);
-      }
-    }
-    double[] u = new double[3];
-    double[] v = new double[3];
-    double[] w = new double[3];
-    for (int c = 0; c < 3; c++) {
-      u[c] = p[1][c] - p[0][c];
-      v[c] = p[2][c] - p[0][c];
-      w[c] = p[3][c] - p[0][c];
-    }
-    return (u[0] * (v[1] * w[2] - v[2] * w[1])
-            - u[1] * (v[0] * w[2] - v[2] * w[0])
-            + u[2] * (v[0] * w[1] - v[1] * w[0]))
-        / 6.0;
   }
 
   private static double rate(double coarse, double fine, double ratio) {

@@ -3,6 +3,7 @@ package dev.soakfield.fem.verify;
 import dev.soakfield.fem.assembly.FeSpace;
 import dev.soakfield.fem.physics.DiffusionModel;
 import dev.soakfield.fem.physics.FaceCondition;
+import dev.soakfield.fem.physics.FaceGroupMembers;
 import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.physics.FaceOwners;
 import dev.soakfield.fem.physics.TimeFunction;
@@ -58,10 +59,7 @@ final class UniformModels {
       if (g < 0) {
         throw new IllegalArgumentException("no face group " + e.getKey());
       }
-      int[] members =
-          java.util.stream.IntStream.range(0, mesh.faceCount())
-              .filter(f -> mesh.faceGroup(f) == g)
-              .toArray();
+      int[] members = FaceGroupMembers.of(mesh, g);
       double[] faceS = new double[members.length];
       for (int i = 0; i < members.length; i++) {
         faceS[i] = sol[owner[members[i]]];

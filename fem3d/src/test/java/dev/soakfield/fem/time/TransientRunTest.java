@@ -1,0 +1,106 @@
+package dev.soakfield.fem.time;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.soakfield.fem.assembly.FeSpace;
+import dev.soakfield.fem.physics.DiffusionModel;
+import dev.soakfield.fem.physics.FaceCondition;
+import dev.soakfield.fem.physics.FaceGroupMembers;
+import dev.soakfield.fem.physics.FaceKind;
+import dev.soakfield.fem.physics.TimeFunction;
+import dev.soakfield.mesh.TetMesh;
+import dev.soakfield.mesh.gen.StructuredMesher;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+class TransientRunTest {
+  /** A unit box, D = S = 1, xmin with the given condition. */
+  private static DiffusionModel box(FaceKind kind, TimeFunction value) {
+    TetMesh mesh = StructuredMesher.box(1, 1, 1, 4, 4, 4, 1);
+    int tets = mesh.tetCount();
+    double[] tensor = new double[6 * tets];
+    for (int t = 0; t < tets; t++) {
+      tensor[6 * t] = 1;
+      tensor[6 * t + 1] = 1;
+      tensor[6 * t + 2] = 1;
+    }
+    double[] ones = new double[tets];
+    Arrays.fill(ones, 1);
+    int g = mesh.faceGroupIndex("xmin");
+    int[] faces = FaceGroupMembers.of(mesh, g);
+    double[] faceS = new double[faces.length];
+    Arrays.fill(faceS, 1);
+    return new DiffusionModel(
+        FeSpace.of(mesh),
+        ones,
+        tensor,
+        new double[tets],
+        new double[tets],
+        List.of(new FaceCondition(g, "xmin", kind, value, TimeFunction.constant(0), faces, faceS)),
+        new double[mesh.nodeCount()]);
+  }
+
+  /** A table with a kink at t = 0.3 (piecewise linear: 0 at 0, 1 at 0.3, 1 at 1). */
+  private static TimeFunction ramp() {
+    return new TimeFunction() {
+      @Override
+      public double at(double t) {
+        return Math.min(1, t / 0.3);
+      }
+
+      @Override
+      public double[] breakpoints() {
+        return new double[] {0.3};
+      }
+    };
+  }
+
+  @Test
+  void adaptiveStepsLandOnOutputsAndTableBreakpoints() {
+    DiffusionModel m = box(FaceKind.FLUX, ramp());
+    ThetaStepper stepper = new ThetaStepper(m, false, 1e-12, 2000);
+    TimeSettings s =
+        new TimeSettings(1.0, new double[] {0.25, 0.7, 1.0}, true, 1e-3, Double.NaN, 1e-4, 1);
+    List<Double> times = new ArrayList<>();
+    List<Double> outputs = new ArrayList<>();
+    RunTotals totals =
+        TransientRun.run(
+            stepper,
+            m.initialPhi(),
+            s,
+            (t, dt, out, output) -> {
+              times.add(t);
+              if (output) {
+                outputs.add(t);
+              }
+            });
+    assertTrue(times.contains(0.3), "breakpoint 0.3 not hit: " + times);
+    assertEquals(List.of(0.25, 0.7, 1.0), outputs);
+    assertEquals(1.0, times.get(times.size() - 1), 0.0);
+    assertEquals(times.size(), totals.steps());
+    // the inflow of a flux face is the integral of the ramp over time times the area (exact
+    // calculus: 0.3/2 + 0.7 = 0.85, area 1); Crank-Nicolson integrates it by the trapezoidal rule,
+    // exact between breakpoints that steps land on, so only the two backward-Euler start steps
+    // (of 1e-4) leave an error, of order dt^2 times the slope
+    double amount = stepper.amount(totals.finalPhi());
+    assertEquals(0.85, amount, 1e-6);
+  }
+
+  @Test
+  void aStalledSolveStopsTheRunWithTheTimeAndASuggestion() {
+    DiffusionModel m = box(FaceKind.CONCENTRATION, TimeFunction.constant(1));
+    ThetaStepper stepper = new ThetaStepper(m, false, 1e-14, 1);
+    TimeSettings s = new TimeSettings(1.0, new double[] {1.0}, false, Double.NaN, 0.1, 0.1, 0.1);
+    RunFailedException e =
+        assertThrows(
+            RunFailedException.class,
+            () -> TransientRun.run(stepper, m.initialPhi(), s, (t, dt, out, output) -> {}));
+    assertEquals(0.0, e.simulatedTime(), 0.0);
+    assertTrue(e.getMessage().contains("did not converge"), e.getMessage());
+    assertTrue(e.getMessage().contains("try shorter steps"), e.getMessage());
+  }
+}
