@@ -88,6 +88,28 @@ class RunPipelineTest {
   }
 
   @Test
+  void aLinearMeshRunsQuadraticWhenTheCaseAsks() throws IOException {
+    Path mesh = dir.resolve("lin.msh");
+    MshWriter.write(mesh, StructuredMesher.box(1e-3, 1e-4, 1e-4, 10, 1, 1, 1), false);
+    Path c =
+        Files.writeString(
+            dir.resolve("q.json"),
+            """
+            { "mesh": "lin.msh", "elements": "quadratic",
+              "materials": { "body": { "diffusivity": 1e-10 } },
+              "faces": { "xmin": { "kind": "concentration", "value": 1.0 } },
+              "time": { "end": 100, "step": 10 } }
+            """);
+    Path out = dir.resolve("q-out");
+    RunPipeline.run(c, out, RunProgress.SILENT);
+    JsonNode summary = new ObjectMapper().readTree(out.resolve("summary.json").toFile());
+    assertEquals(2, summary.get("mesh").get("order").asInt());
+    // 10 cells of a Kuhn-split box promoted: (2*10+1) x 3 x 3 nodes (mid-edge nodes on a
+    // structured grid with one cell across y and z; exact count of the construction)
+    assertEquals(21 * 3 * 3, summary.get("mesh").get("nodes").asInt());
+  }
+
+  @Test
   void aBadCaseLeavesTheEarlierResultsAndNoHalfFolder() throws IOException {
     Path out = dir.resolve("out");
     Files.createDirectories(out);
