@@ -4,6 +4,7 @@ import dev.soakfield.fem.assembly.CsrMatrix;
 import dev.soakfield.fem.assembly.SystemAssembler;
 import dev.soakfield.fem.physics.DiffusionModel;
 import dev.soakfield.fem.physics.FaceCondition;
+import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.solve.PcgSolver;
 import dev.soakfield.fem.solve.PreconditionerKind;
 import java.util.ArrayList;
@@ -240,6 +241,31 @@ public final class ThetaStepper {
         }
       }
     }
+  }
+
+  /**
+   * The largest potential the boundary data impose (held concentrations and exchange environments,
+   * over their table points, divided by the solubility there): the natural scale of the field for
+   * step-error control; 0 when only fluxes drive the problem.
+   */
+  public double referencePotential() {
+    double ref = 0;
+    for (FaceCondition fc : model.faces()) {
+      if (fc.kind() != FaceKind.CONCENTRATION && fc.kind() != FaceKind.EXCHANGE) {
+        continue;
+      }
+      double minS = Double.POSITIVE_INFINITY;
+      for (double s : fc.faceSolubility()) {
+        minS = Math.min(minS, s);
+      }
+      double[] times = fc.value().breakpoints();
+      double peak = Math.abs(fc.value().at(0));
+      for (double t : times) {
+        peak = Math.max(peak, Math.abs(fc.value().at(t)));
+      }
+      ref = Math.max(ref, peak / minS);
+    }
+    return ref;
   }
 
   /** Every time at which a boundary table changes slope. */

@@ -43,7 +43,9 @@ public final class TransientRun {
     double[] phi = phiStart.clone();
     double[] raised = stepper.raise(phi, 0.0);
     listener.started(new StepOutcome(phi.clone(), raised, 0.0, stepper.amount(phi), 0, 0.0));
-    double scale = maxAbs(phi);
+    // error scale: the field's size, or what the boundary data will drive it to, whichever is
+    // larger
+    double scale = Math.max(maxAbs(phi), stepper.referencePotential());
     double[] previous = null;
     double previousDt = 0;
     double t = 0;
