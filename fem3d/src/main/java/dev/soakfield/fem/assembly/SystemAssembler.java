@@ -294,6 +294,7 @@ public final class SystemAssembler {
     double[] xyz = space.coordinates();
     int[] conn = space.tetNodes();
     int tetCount = space.mesh().tetCount();
+    TetKernel corners = TetKernel.forOrder(1); // the straight tet through the four corners
     for (int t = 0; t < tetCount; t++) {
       for (int k = 0; k < 4; k++) {
         int p = 3 * conn[t * per + k];
@@ -301,24 +302,11 @@ public final class SystemAssembler {
         x[3 * k + 1] = xyz[p + 1];
         x[3 * k + 2] = xyz[p + 2];
       }
-      double v = cornerVolume(x);
+      double v = corners.volume(x);
       if (!(v > 0)) {
         throw new IllegalArgumentException(
             "tetrahedron " + t + " has corner volume " + v + " (expected positive orientation)");
       }
     }
-  }
-
-  static double cornerVolume(double[] x) {
-    double ax = x[3] - x[0];
-    double ay = x[4] - x[1];
-    double az = x[5] - x[2];
-    double bx = x[6] - x[0];
-    double by = x[7] - x[1];
-    double bz = x[8] - x[2];
-    double cx = x[9] - x[0];
-    double cy = x[10] - x[1];
-    double cz = x[11] - x[2];
-    return (ax * (by * cz - bz * cy) + ay * (bz * cx - bx * cz) + az * (bx * cy - by * cx)) / 6;
   }
 }
