@@ -19,15 +19,6 @@ final class Msh2Parser extends MshSectionParser {
   }
 
   @Override
-  void readElements() {
-    if (c.isBinary()) {
-      readElementsBinary();
-    } else {
-      readElementsAscii();
-    }
-  }
-
-  @Override
   void resolveGroups() {
     GroupResolver.resolve22(
         c, raw, elements, tetEntities, triEntities, firstTetWithoutPhysical, firstWithoutAnyTag);
@@ -78,7 +69,8 @@ final class Msh2Parser extends MshSectionParser {
     nodes.count = n;
   }
 
-  private void readElementsAscii() {
+  @Override
+  void readElementsAscii() {
     // the smallest element row: `1 15 0 1` and a line break
     long count = c.nextCount("number of elements", 9);
     c.endOfLine("the number of elements");
@@ -130,7 +122,8 @@ final class Msh2Parser extends MshSectionParser {
     }
   }
 
-  private void readElementsBinary() {
+  @Override
+  void readElementsBinary() {
     // binary: at least an int id and one node int per element
     long count = c.nextCount("number of elements", 8);
     c.endOfLine("the number of elements");

@@ -40,15 +40,6 @@ final class Msh4Parser extends MshSectionParser {
   }
 
   @Override
-  void readElements() {
-    if (c.isBinary()) {
-      readElementsBinary();
-    } else {
-      readElementsAscii();
-    }
-  }
-
-  @Override
   void resolveGroups() {
     GroupResolver.resolve41(c, raw, elements, blocks, entities);
   }
@@ -155,7 +146,8 @@ final class Msh4Parser extends MshSectionParser {
 
   // ---- elements ------------------------------------------------------------------------------
 
-  private void readElementsAscii() {
+  @Override
+  void readElementsAscii() {
     int headerAt = c.headerAt;
     long blockCount = c.nextCount("number of element blocks", 8);
     // the smallest element is a point: `1 1` and a line break
@@ -219,7 +211,8 @@ final class Msh4Parser extends MshSectionParser {
     checkTotal(read, elementCount, "elements", headerAt);
   }
 
-  private void readElementsBinary() {
+  @Override
+  void readElementsBinary() {
     int headerAt = c.headerAt;
     int s = c.sizeT();
     long blockCount = c.sizeCount("number of element blocks", 12 + s);

@@ -21,7 +21,17 @@ abstract class MshSectionParser {
 
   abstract void readNodes();
 
-  abstract void readElements();
+  abstract void readElementsAscii();
+
+  abstract void readElementsBinary();
+
+  private void readElements() {
+    if (c.isBinary()) {
+      readElementsBinary();
+    } else {
+      readElementsAscii();
+    }
+  }
 
   /** Reads a section only this version knows; false when {@code name} is not one of them. */
   boolean readOwnSection(String name, int at) {
