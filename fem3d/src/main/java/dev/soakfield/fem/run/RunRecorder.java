@@ -1,0 +1,304 @@
+package dev.soakfield.fem.run;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.soakfield.fem.assembly.PointLocator;
+import dev.soakfield.fem.assembly.SystemAssembler;
+import dev.soakfield.fem.casefile.CaseSpec;
+import dev.soakfield.fem.casefile.ProbeSpec;
+import dev.soakfield.fem.physics.DiffusionModel;
+import dev.soakfield.fem.post.GroupMonitor;
+import dev.soakfield.fem.post.NodalSolubility;
+import dev.soakfield.fem.post.ThresholdClock;
+import dev.soakfield.fem.time.RunTotals;
+import dev.soakfield.fem.time.ThetaStepper;
+import dev.soakfield.mesh.FaceGroupKind;
+import dev.soakfield.mesh.TetMesh;
+import dev.soakfield.mesh.vtk.PvdEntry;
+import dev.soakfield.mesh.vtk.PvdWriter;
+import dev.soakfield.mesh.vtk.VtuFormat;
+import dev.soakfield.mesh.vtk.VtuWriter;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+
+/** Writes the series row by row, the fields at output times, and the summary at the end. */
+final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoCloseable {
+  private final Path dir;
+  private final CaseSpec spec;
+  private final DiffusionModel model;
+  private final TetMesh mesh;
+  private final RunProgress progress;
+  private final List<String> warnings;
+  private final SeriesTable series;
+  private final GroupMonitor groups;
+  private final ThresholdClock clock;
+  private final double[] nodalS;
+  private final List<Optional<PointLocator.Probe>> probes = new ArrayList<>();
+  private final double[] probeFirst;
+  private final double[] probePrevious;
+  private final int[] exteriorGroups;
+  private final double[] cumulativeInflow;
+  private final List<PvdEntry> frames = new ArrayList<>();
+  private final double amount0;
+  private final double end;
+  private double amountNow;
+  private double sources;
+  private double moved;
+  private int steps;
+
+  RunRecorder(
+      Path dir,
+      CaseSpec spec,
+      DiffusionModel model,
+      ThetaStepper stepper,
+      RunProgress progress,
+      List<String> warnings)
+      throws IOException {
+    this.dir = dir;
+    this.spec = spec;
+    this.model = model;
+    this.mesh = model.space().mesh();
+    this.progress = progress;
+    this.warnings = warnings;
+    this.end = spec.time().end();
+    double[] phi0 = model.initialPhi();
+    stepper.applyPrescribed(phi0, 0.0);
+    SystemAssembler asm = new SystemAssembler(model.space());
+    double threshold = spec.threshold().orElse(Double.NaN);
+    groups = new GroupMonitor(asm, model.solubility(), threshold, phi0);
+    nodalS = NodalSolubility.of(mesh, model.solubility());
+    clock = new ThresholdClock(spec.threshold().orElse(Double.POSITIVE_INFINITY), nodalS, phi0);
+    PointLocator locator = new PointLocator(model.space());
+    for (ProbeSpec p : spec.probes()) {
+      Optional<PointLocator.Probe> found = locator.locate(p.x(), p.y(), p.z());
+      if (found.isEmpty()) {
+        warnings.add("probe '" + p.name() + "' lies outside the mesh; its column is empty");
+      }
+      probes.add(found);
+    }
+    probeFirst = new double[probes.size()];
+    java.util.Arrays.fill(probeFirst, -1);
+    probePrevious = probeValues(phi0);
+    for (int i = 0; i < probeFirst.length; i++) {
+      if (probePrevious[i] >= threshold) {
+        probeFirst[i] = 0;
+      }
+    }
+    exteriorGroups =
+        java.util.stream.IntStream.range(0, mesh.faceGroups().size())
+            .filter(g -> mesh.faceGroups().get(g).kind() == FaceGroupKind.EXTERIOR)
+            .toArray();
+    cumulativeInflow = new double[mesh.faceGroups().size()];
+    amount0 = stepper.amount(model.initialPhi()); // before held faces are raised
+    amountNow = amount0;
+    Files.createDirectories(dir.resolve("fields"));
+    series = new SeriesTable(dir.resolve("series.csv"), header());
+  }
+
+  @Override
+  public void started(dev.soakfield.fem.time.StepOutcome initial) {
+    try {
+      double[] raised = initial.faceInflow();
+      for (int g = 0; g < raised.length; g++) {
+        cumulativeInflow[g] += raised[g];
+        moved += Math.abs(raised[g]);
+      }
+      amountNow = initial.amount();
+      series.row(row(0.0, 0.0, initial.phi(), raised, groups.maxima(initial.phi())));
+      writeFrame(0.0, initial.phi());
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+  }
+
+  private List<String> header() {
+    List<String> h = new ArrayList<>();
+    h.add("time");
+    h.add("amount");
+    for (var g : mesh.volumeGroups()) {
+      h.add("amount:" + g.name());
+    }
+    for (var g : mesh.volumeGroups()) {
+      h.add("max:" + g.name());
+    }
+    for (int g : exteriorGroups) {
+      h.add("inflow_rate:" + mesh.faceGroups().get(g).name());
+    }
+    for (int g : exteriorGroups) {
+      h.add("inflow:" + mesh.faceGroups().get(g).name());
+    }
+    for (ProbeSpec p : spec.probes()) {
+      h.add("probe:" + p.name());
+    }
+    h.add("balance_error");
+    return h;
+  }
+
+  private double[] probeValues(double[] phi) {
+    double[] v = new double[probes.size()];
+    for (int i = 0; i < v.length; i++) {
+      Optional<PointLocator.Probe> p = probes.get(i);
+      v[i] = p.isPresent() ? model.solubility()[p.get().tet()] * p.get().value(phi) : Double.NaN;
+    }
+    return v;
+  }
+
+  private double[] row(double t, double dt, double[] phi, double[] stepInflow, double[] maxima) {
+    List<Double> r = new ArrayList<>();
+    r.add(t);
+    double[] amounts = groups.amounts(phi);
+    double total = 0;
+    for (double a : amounts) {
+      total += a;
+    }
+    r.add(total);
+    for (double a : amounts) {
+      r.add(a);
+    }
+    for (double m : maxima) {
+      r.add(m);
+    }
+    for (int g : exteriorGroups) {
+      r.add(dt > 0 ? stepInflow[g] / dt : 0.0);
+    }
+    for (int g : exteriorGroups) {
+      r.add(cumulativeInflow[g]);
+    }
+    for (double p : probeValues(phi)) {
+      r.add(p);
+    }
+    r.add(balanceError());
+    return r.stream().mapToDouble(Double::doubleValue).toArray();
+  }
+
+  private double balanceError() {
+    double in = 0;
+    for (double v : cumulativeInflow) {
+      in += v;
+    }
+    return amountNow - amount0 - in - sources;
+  }
+
+  double balanceRelative() {
+    double scale = Math.max(moved, Math.abs(amountNow - amount0));
+    return scale > 0 ? Math.abs(balanceError()) / scale : 0.0;
+  }
+
+  @Override
+  public void accepted(
+      double t, double dt, dev.soakfield.fem.time.StepOutcome out, boolean output) {
+    try {
+      double[] phi = out.phi();
+      double[] inflow = out.faceInflow();
+      for (int g = 0; g < inflow.length; g++) {
+        cumulativeInflow[g] += inflow[g];
+        moved += Math.abs(inflow[g]);
+      }
+      sources += out.sourceAmount();
+      moved += Math.abs(out.sourceAmount());
+      amountNow = out.amount();
+      double[] maxima = groups.step(t, dt, phi);
+      clock.step(t, dt, phi);
+      double[] pv = probeValues(phi);
+      for (int i = 0; i < pv.length; i++) {
+        double thr = spec.threshold().orElse(Double.NaN);
+        if (probeFirst[i] < 0 && pv[i] >= thr) {
+          probeFirst[i] = ThresholdClock.crossing(t - dt, probePrevious[i], t, pv[i], thr);
+        }
+      }
+      System.arraycopy(pv, 0, probePrevious, 0, pv.length);
+      series.row(row(t, dt, phi, inflow, maxima));
+      if (output) {
+        writeFrame(t, phi);
+      }
+      steps++;
+      progress.step(t, end, steps, 0);
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+  }
+
+  private void writeFrame(double t, double[] phi) throws IOException {
+    String name = String.format(Locale.ROOT, "fields/c_%04d.vtu", frames.size());
+    double[] c = new double[phi.length];
+    for (int i = 0; i < c.length; i++) {
+      c[i] = nodalS[i] * phi[i];
+    }
+    double[] group = new double[mesh.tetCount()];
+    for (int e = 0; e < group.length; e++) {
+      group[e] = mesh.tetGroup(e);
+    }
+    VtuWriter.write(
+        dir.resolve(name),
+        mesh,
+        List.of(
+            new VtuWriter.Field("c", 1, c),
+            new VtuWriter.Field("phi", 1, phi.clone()),
+            new VtuWriter.Field("first_exceed", 1, clock.firstTimes())),
+        List.of(new VtuWriter.Field("group", 1, group)),
+        VtuFormat.APPENDED_BASE64,
+        false);
+    frames.add(new PvdEntry(t, name));
+  }
+
+  void finish(RunTotals totals) throws IOException {
+    PvdWriter.write(dir.resolve("fields.pvd"), frames);
+    Map<String, Object> root = new LinkedHashMap<>();
+    root.put("case", spec.caseFile().toString());
+    Map<String, Object> m = new LinkedHashMap<>();
+    m.put("file", spec.mesh().toString());
+    m.put("nodes", mesh.nodeCount());
+    m.put("tets", mesh.tetCount());
+    m.put("order", mesh.order());
+    root.put("mesh", m);
+    Map<String, Object> solver = new LinkedHashMap<>();
+    solver.put("steps", totals.steps());
+    solver.put("rejected_steps", totals.rejectedSteps());
+    solver.put("linear_iterations", totals.linearIterations());
+    solver.put("end_time", end);
+    root.put("solver", solver);
+    Map<String, Object> balance = new LinkedHashMap<>();
+    balance.put("relative", balanceRelative());
+    balance.put("error", balanceError());
+    balance.put("amount_start", amount0);
+    balance.put("amount_end", amountNow);
+    root.put("balance", balance);
+    Map<String, Object> threshold = new LinkedHashMap<>();
+    threshold.put("value", spec.threshold().isPresent() ? spec.threshold().getAsDouble() : null);
+    Map<String, Object> perGroup = new LinkedHashMap<>();
+    double[] gt = groups.firstTimes();
+    for (int g = 0; g < gt.length; g++) {
+      perGroup.put(mesh.volumeGroups().get(g).name(), gt[g] < 0 ? null : gt[g]);
+    }
+    Map<String, Object> perProbe = new LinkedHashMap<>();
+    for (int i = 0; i < probeFirst.length; i++) {
+      perProbe.put(spec.probes().get(i).name(), probeFirst[i] < 0 ? null : probeFirst[i]);
+    }
+    Map<String, Object> first = new LinkedHashMap<>();
+    first.put("volume_groups", perGroup);
+    first.put("probes", perProbe);
+    threshold.put("first_time", first);
+    root.put("threshold", spec.threshold().isPresent() ? threshold : null);
+    root.put("warnings", warnings);
+    root.put(
+        "caution",
+        "Model estimates from the data given. Where results bear on safety, check them against"
+            + " the applicable standards and have them reviewed by a qualified engineer.");
+    new ObjectMapper()
+        .enable(SerializationFeature.INDENT_OUTPUT)
+        .writeValue(dir.resolve("summary.json").toFile(), root);
+  }
+
+  @Override
+  public void close() throws IOException {
+    series.close();
+  }
+}
