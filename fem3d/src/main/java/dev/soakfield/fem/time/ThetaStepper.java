@@ -375,6 +375,17 @@ public final class ThetaStepper {
   }
 
   /**
+   * A copy of the matrix one step solves, M + θ·dt·L(t1) with held rows and columns eliminated
+   * (held rows keep their diagonal): for users who cross-check a solve with another tool.
+   */
+  public CsrMatrix systemMatrix(double dt, double theta, double t1) {
+    prepareSystem(dt, theta, t1);
+    CsrMatrix copy = system.zeroCopy();
+    copy.addScaled(1.0, system);
+    return copy;
+  }
+
+  /**
    * Advances phi0 at t0 by dt with weight theta (1 = backward Euler, 0.5 = Crank–Nicolson).
    *
    * @throws dev.soakfield.fem.solve.SolverStalledException when the linear solve does not converge
