@@ -13,6 +13,7 @@ import picocli.CommandLine.Command;
       MeshCommand.class,
       InfoCommand.class,
       RunCommand.class,
+      BakeCommand.class,
       DemoCommand.class,
       VerifyCommand.class,
       BenchCommand.class,

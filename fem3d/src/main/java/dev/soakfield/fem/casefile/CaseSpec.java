@@ -73,6 +73,24 @@ public record CaseSpec(
     return Collections.unmodifiableMap(new LinkedHashMap<>(map));
   }
 
+  /** The same case under another environment and time control (for bake searches). */
+  public CaseSpec withEnvironment(Optional<ExposureHistory> newExposure, TimeSpec newTime) {
+    return new CaseSpec(
+        caseFile,
+        mesh,
+        elements,
+        materials,
+        faces,
+        initial,
+        newTime,
+        probes,
+        threshold,
+        places,
+        law,
+        temperature,
+        newExposure);
+  }
+
   /** Where the value at {@code path} stands, or line 0 when the file does not hold the path. */
   public SourcePlace placeOf(String path) {
     return places.getOrDefault(path, new SourcePlace(0, 0));

@@ -80,7 +80,12 @@ public final class RunPipeline {
   /** Runs the case and writes its results into {@code outDir}; {@code laws} resolves its laws. */
   public static RunSummary run(Path caseFile, Path outDir, RunProgress progress, LawResolver laws)
       throws IOException {
-    Prepared prepared = prepare(caseFile);
+    return run(prepare(caseFile), outDir, progress, laws);
+  }
+
+  /** Runs a case already read and checked (see {@link #prepare}). */
+  public static RunSummary run(
+      Prepared prepared, Path outDir, RunProgress progress, LawResolver laws) throws IOException {
     CaseSpec spec = prepared.spec();
     TetMesh mesh = prepared.mesh();
     List<String> warnings = new ArrayList<>(prepared.warnings());

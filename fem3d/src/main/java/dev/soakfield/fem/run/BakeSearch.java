@@ -1,0 +1,190 @@
+package dev.soakfield.fem.run;
+
+import dev.soakfield.fem.casefile.CaseSpec;
+import dev.soakfield.fem.casefile.StopSpec;
+import dev.soakfield.fem.casefile.TimeScheme;
+import dev.soakfield.fem.casefile.TimeSpec;
+import dev.soakfield.fem.physics.ExposureHistory;
+import dev.soakfield.fem.physics.Law;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+import java.util.stream.Stream;
+
+/**
+ * The shortest bake at a temperature that brings a target (a volume group's maximum concentration
+ * or a probe's value) below a level. One run with a stop condition brackets the time between two
+ * accepted steps; bisection on the bake duration, each trial a transient run that ends exactly at
+ * the trial time, narrows the bracket to the tolerance. The answer is the bracket's upper end, a
+ * time at which the target is met.
+ */
+public final class BakeSearch {
+  private BakeSearch() {}
+
+  /**
+   * What to bake for.
+   *
+   * @param target "group" or "probe"
+   * @param name the volume group or probe
+   * @param level the concentration to fall below
+   */
+  public record Target(String target, String name, double level) {}
+
+  /**
+   * The bake environment.
+   *
+   * @param temperature K
+   * @param humidity relative humidity during the bake (Henry's law), usually 0
+   * @param pressure hydrogen pressure during the bake in Pa (Sieverts' law), usually 0
+   * @param longest the longest bake to consider, s
+   */
+  public record Oven(double temperature, double humidity, double pressure, double longest) {}
+
+  /**
+   * The answer.
+   *
+   * @param met whether the target was met within the longest bake
+   * @param time the shortest bake found, s (NaN when not met)
+   * @param lowerBound the longest bake known not to meet the target, s
+   * @param curveTimes times of the target's curve, s
+   * @param curveValues the target quantity at those times
+   * @param runs transient runs made
+   */
+  @SuppressWarnings("ArrayRecordComponent") // built once and handed over
+  public record Result(
+      boolean met,
+      double time,
+      double lowerBound,
+      double[] curveTimes,
+      double[] curveValues,
+      int runs) {}
+
+  /**
+   * Searches the bake time.
+   *
+   * @param relativeTolerance bracket width relative to the bake time at which bisection stops
+   * @param work a folder for the trial runs (emptied of them afterwards)
+   */
+  public static Result search(
+      Path caseFile,
+      Oven oven,
+      Target target,
+      double relativeTolerance,
+      LawResolver laws,
+      Path work)
+      throws IOException {
+    RunPipeline.Prepared base = RunPipeline.prepare(caseFile);
+    checkTarget(base.spec(), target);
+    StopSpec stop = new StopSpec(target.target(), target.name(), true, target.level());
+    Path first = work.resolve("bake-bracket");
+    RunPipeline.run(
+        withBake(base, oven, oven.longest(), Optional.of(stop)), first, RunProgress.SILENT, laws);
+    SeriesColumn curve = SeriesColumn.read(first.resolve("series.csv"), column(target));
+    int runs = 1;
+    int hit = -1;
+    for (int i = 0; i < curve.times().length; i++) {
+      if (curve.values()[i] < target.level()) {
+        hit = i;
+        break;
+      }
+    }
+    if (hit < 0) {
+      deleteTree(first);
+      return new Result(false, Double.NaN, oven.longest(), curve.times(), curve.values(), runs);
+    }
+    if (hit == 0) {
+      deleteTree(first);
+      return new Result(true, 0.0, 0.0, curve.times(), curve.values(), runs);
+    }
+    double lo = curve.times()[hit - 1];
+    double hi = curve.times()[hit];
+    while (hi - lo > relativeTolerance * hi && runs < 40) {
+      double mid = 0.5 * (lo + hi);
+      Path trial = work.resolve("bake-trial");
+      RunPipeline.run(withBake(base, oven, mid, Optional.empty()), trial, RunProgress.SILENT, laws);
+      SeriesColumn end = SeriesColumn.read(trial.resolve("series.csv"), column(target));
+      runs++;
+      deleteTree(trial);
+      if (end.values()[end.values().length - 1] < target.level()) {
+        hi = mid;
+      } else {
+        lo = mid;
+      }
+    }
+    deleteTree(first);
+    return new Result(true, hi, lo, curve.times(), curve.values(), runs);
+  }
+
+  private static void checkTarget(CaseSpec spec, Target t) {
+    boolean known =
+        t.target().equals("group")
+            ? spec.materials().containsKey(t.name())
+            : spec.probes().stream().anyMatch(p -> p.name().equals(t.name()));
+    if (!known) {
+      List<String> names =
+          t.target().equals("group")
+              ? List.copyOf(spec.materials().keySet())
+              : spec.probes().stream().map(p -> p.name()).toList();
+      throw new IllegalArgumentException(
+          "bake target: found "
+              + t.target()
+              + " '"
+              + t.name()
+              + "', expected one of "
+              + String.join(", ", names));
+    }
+  }
+
+  private static String column(Target t) {
+    return (t.target().equals("group") ? "max:" : "probe:") + t.name();
+  }
+
+  /** The case with the oven as its whole exposure, ending at {@code duration}. */
+  static RunPipeline.Prepared withBake(
+      RunPipeline.Prepared base, Oven oven, double duration, Optional<StopSpec> stop) {
+    CaseSpec spec = base.spec();
+    boolean henry = spec.law() == Law.HENRY;
+    boolean sieverts = spec.law() == Law.SIEVERTS;
+    ExposureHistory oneSegment =
+        new ExposureHistory(
+            List.of(
+                new ExposureHistory.Segment(
+                    0,
+                    duration,
+                    oven.temperature(),
+                    oven.temperature(),
+                    henry ? oven.humidity() : Double.NaN,
+                    henry ? oven.humidity() : Double.NaN,
+                    sieverts ? oven.pressure() : Double.NaN,
+                    sieverts ? oven.pressure() : Double.NaN)));
+    TimeSpec old = spec.time();
+    TimeSpec time =
+        new TimeSpec(
+            duration,
+            List.of(duration),
+            TimeScheme.BACKWARD_EULER,
+            old.capacity(),
+            old.steps(),
+            stop);
+    return new RunPipeline.Prepared(
+        spec.withEnvironment(Optional.of(oneSegment), time), base.mesh(), base.warnings());
+  }
+
+  private static void deleteTree(Path root) throws IOException {
+    if (!Files.exists(root)) {
+      return;
+    }
+    List<Path> all = new ArrayList<>();
+    try (Stream<Path> walk = Files.walk(root)) {
+      walk.forEach(all::add);
+    }
+    all.sort(Comparator.reverseOrder());
+    for (Path p : all) {
+      Files.deleteIfExists(p);
+    }
+  }
+}
