@@ -15,6 +15,7 @@ import picocli.CommandLine.Command;
       RunCommand.class,
       DemoCommand.class,
       VerifyCommand.class,
+      FitCommand.class,
       BenchCommand.class,
       CommandLine.HelpCommand.class
     })

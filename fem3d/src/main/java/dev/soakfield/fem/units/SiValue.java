@@ -27,7 +27,7 @@ import tech.units.indriya.unit.Units;
  * grammar: {@code ^} for powers, {@code *} or {@code ·} for products, {@code /} for quotients, with
  * {@code a/b/c} read as {@code a/(b*c)}; a leading {@code 1/} is allowed ({@code "1/s"}). On top of
  * Indriya's symbols we accept {@code degC}, {@code °C}, {@code bar}, {@code mbar}, {@code um},
- * {@code wt%}, {@code wppm} and {@code ppm}.
+ * {@code uA}, {@code ug}, {@code wt%}, {@code wppm} and {@code ppm}.
  *
  * <p>Input only: hot loops never call this. Thread-safe; parsed units and converters are cached, so
  * thousands of values cost little more than their number parsing.
@@ -49,6 +49,8 @@ public final class SiValue {
     f.alias(Units.PASCAL.multiply(1e5), "bar");
     f.alias(Units.PASCAL.multiply(100), "mbar");
     f.alias(MetricPrefix.MICRO(Units.METRE), "um");
+    f.alias(MetricPrefix.MICRO(Units.AMPERE), "uA");
+    f.alias(MetricPrefix.MICRO(Units.GRAM), "ug");
     f.alias(Units.PERCENT, "wt%");
     f.alias(AbstractUnit.ONE.divide(1e6), "wppm");
     f.alias(AbstractUnit.ONE.divide(1e6), "ppm");
@@ -74,7 +76,7 @@ public final class SiValue {
     if (unit.isEmpty()) {
       return number;
     }
-    return converter(text, unit, siUnit).convert(number);
+    return converter("'" + text.strip() + "'", unit, siUnit).convert(number);
   }
 
   /**
@@ -86,10 +88,10 @@ public final class SiValue {
   public static DoubleUnaryOperator converterTo(String unit, String siUnit) throws UnitException {
     String u = unit.strip();
     if (u.isEmpty()) {
-      unitOf(siUnit, siUnit);
+      unitOf(siUnit, "");
       return DoubleUnaryOperator.identity();
     }
-    UnitConverter c = converter("unit '" + u + "'", u, siUnit);
+    UnitConverter c = converter("", u, siUnit);
     return c::convert;
   }
 
@@ -100,7 +102,7 @@ public final class SiValue {
    * @throws UnitException when the two units differ in dimension
    */
   public static double fromSi(double si, String siUnit, String unit) throws UnitException {
-    return converter("unit '" + unit + "'", unit, siUnit).inverse().convert(si);
+    return converter("", unit, siUnit).inverse().convert(si);
   }
 
   /**
@@ -112,7 +114,7 @@ public final class SiValue {
   public static String format(double si, String siUnit) {
     Unit<?> u;
     try {
-      u = unitOf(siUnit, siUnit);
+      u = unitOf(siUnit, "");
     } catch (UnitException e) {
       throw new IllegalArgumentException(e.getMessage(), e);
     }
@@ -145,7 +147,7 @@ public final class SiValue {
     if (unit.isEmpty()) {
       return AbstractUnit.ONE.getDimension().toString();
     }
-    return unitOf(unit, text).getDimension().toString();
+    return unitOf(unit, "'" + t + "'").getDimension().toString();
   }
 
   private static UnitConverter converter(String found, String unit, String siUnit)
@@ -156,17 +158,18 @@ public final class SiValue {
       return cached;
     }
     Unit<?> from = unitOf(unit, found);
-    Unit<?> to = unitOf(siUnit, siUnit);
+    Unit<?> to = unitOf(siUnit, "");
+    String shown = found.isEmpty() ? "unit '" + unit + "'" : found;
     if (!from.isCompatible(to)) {
       throw new UnitException(
-          found + " of dimension " + from.getDimension(), "a value in " + describe(siUnit));
+          shown + " of dimension " + from.getDimension(), "a value in " + describe(siUnit));
     }
     UnitConverter c;
     try {
       c = from.getConverterToAny(to);
     } catch (IncommensurableException e) {
       throw new UnitException(
-          found + " of dimension " + from.getDimension(), "a value in " + describe(siUnit));
+          shown + " of dimension " + from.getDimension(), "a value in " + describe(siUnit));
     }
     CONVERTERS.put(key, c);
     return c;
@@ -174,7 +177,7 @@ public final class SiValue {
 
   private static String describe(String siUnit) {
     try {
-      return siUnit + " (dimension " + unitOf(siUnit, siUnit).getDimension() + ")";
+      return siUnit + " (dimension " + unitOf(siUnit, "").getDimension() + ")";
     } catch (UnitException e) {
       return siUnit;
     }
@@ -203,7 +206,7 @@ public final class SiValue {
       return parseWhole(chainedQuotient(u));
     } catch (MeasurementParseException | IllegalArgumentException e) {
       throw new UnitException(
-          found.equals(unit) ? "unknown unit '" + unit + "'" : found + ": unknown unit '" + u + "'",
+          found.isEmpty() ? "unknown unit '" + u + "'" : found + " with unknown unit '" + u + "'",
           "a unit such as m, mm, h, degC, MPa, bar, kg/m^3, m^2/s, kJ/mol, wppm or wt%");
     }
   }
