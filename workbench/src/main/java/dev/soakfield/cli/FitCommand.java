@@ -200,7 +200,7 @@ final class FitCommand implements Callable<Integer> {
       out.printf(Locale.ROOT, "  %-22s %s%n", "diffusivity", interval(r.diffusivity(), "m^2/s"));
       out.printf(
           Locale.ROOT,
-          "  %-22s %s mm^2/h%n",
+          "  %-22s = %s mm²/h%n",
           "",
           SiValue.formatNumber(in(r.diffusivity().value(), "m^2/s", "mm^2/h")));
       out.printf(
