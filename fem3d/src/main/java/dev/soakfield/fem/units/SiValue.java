@@ -38,7 +38,32 @@ public final class SiValue {
 
   private static final SimpleUnitFormat FORMAT = newFormat();
   private static final Map<String, Unit<?>> UNITS = new ConcurrentHashMap<>();
-  private static final Map<String, UnitConverter> CONVERTERS = new ConcurrentHashMap<>();
+  private static final Map<String, Affine> CONVERTERS = new ConcurrentHashMap<>();
+
+  /**
+   * value_SI = scale·value + offset. Every unit we accept converts affinely; Indriya's converters
+   * compute with exact rationals and cost microseconds a call, so each is reduced to two doubles
+   * once.
+   */
+  private record Affine(double scale, double offset) {
+    static Affine of(UnitConverter c) {
+      double offset = c.convert(0.0);
+      double scale = (c.convert(1e6) - offset) / 1e6;
+      if (c.isLinear()) {
+        scale = c.convert(1.0);
+        offset = 0;
+      }
+      return new Affine(scale, offset);
+    }
+
+    double convert(double v) {
+      return scale * v + offset;
+    }
+
+    Affine inverse() {
+      return new Affine(1 / scale, -offset / scale);
+    }
+  }
 
   private SiValue() {}
 
@@ -91,7 +116,7 @@ public final class SiValue {
       unitOf(siUnit, "");
       return DoubleUnaryOperator.identity();
     }
-    UnitConverter c = converter("", u, siUnit);
+    Affine c = converter("", u, siUnit);
     return c::convert;
   }
 
@@ -150,10 +175,9 @@ public final class SiValue {
     return unitOf(unit, "'" + t + "'").getDimension().toString();
   }
 
-  private static UnitConverter converter(String found, String unit, String siUnit)
-      throws UnitException {
+  private static Affine converter(String found, String unit, String siUnit) throws UnitException {
     String key = unit + "\u0000" + siUnit;
-    UnitConverter cached = CONVERTERS.get(key);
+    Affine cached = CONVERTERS.get(key);
     if (cached != null) {
       return cached;
     }
@@ -171,8 +195,9 @@ public final class SiValue {
       throw new UnitException(
           shown + " of dimension " + from.getDimension(), "a value in " + describe(siUnit));
     }
-    CONVERTERS.put(key, c);
-    return c;
+    Affine affine = Affine.of(c);
+    CONVERTERS.put(key, affine);
+    return affine;
   }
 
   private static String describe(String siUnit) {
