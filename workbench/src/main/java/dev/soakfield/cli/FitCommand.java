@@ -35,7 +35,7 @@ import picocli.CommandLine.Spec;
     name = "fit",
     mixinStandardHelpOptions = true,
     description = {
-      "Fits measured diffusion data with 95 % confidence intervals.",
+      "Fits measured diffusion data with 95 %% confidence intervals.",
       "Weighing (default): CSV 'time,mass' (units optional, e.g. 'time [h],mass [mg]'); the first"
           + " row is the dry mass at the start of exposure unless --dry-mass is given. With"
           + " --desorption the first row is the mass when drying starts.",
@@ -170,12 +170,12 @@ final class FitCommand implements Callable<Integer> {
       t[i] = table.x[i + first] - t0;
       change[i] = desorption ? m0 - table.y[i + first] : table.y[i + first] - m0;
     }
-    if (!(t[0] > 0)) {
+    if (t[0] < 0) {
       throw new UserInputException(
           FitTable.place(data, table.lines[first])
               + "found time "
               + table.x[first]
-              + " s, expected a time after the start of exposure");
+              + " s, expected a time at or after the start of exposure (0)");
     }
     UptakeFit.Result r = UptakeFit.fit(t, change, l, factor);
     double dry;
@@ -548,7 +548,6 @@ final class FitCommand implements Callable<Integer> {
     node.put("value", e.value());
     node.put("low", e.low());
     node.put("high", e.high());
-    node.put("standardError", e.standardError());
   }
 
   private static void putOptional(ObjectNode tree, String key, OptionalDouble v) {

@@ -69,6 +69,15 @@ class FitCommandTest {
     assertTrue(covers(j.get("saturation"), 0.0035), j.get("saturation").toString());
     assertEquals(17, j.get("points").size());
     assertTrue(j.get("cautions").size() >= 2);
+    assertEquals(3, j.get("diffusivity").size(), "value, low, high");
+  }
+
+  @Test
+  void helpShowsThePercentSign() {
+    CliRun r = CliRun.of("fit", "--help");
+    assertEquals(0, r.exitCode(), r.err());
+    assertTrue(r.out().contains("95 % confidence intervals"), r.out());
+    assertTrue(r.out().contains("--permeation"), r.out());
   }
 
   @Test
