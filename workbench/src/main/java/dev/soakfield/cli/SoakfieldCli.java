@@ -16,6 +16,7 @@ import picocli.CommandLine.Command;
       BakeCommand.class,
       DemoCommand.class,
       VerifyCommand.class,
+      FitCommand.class,
       BenchCommand.class,
       CommandLine.HelpCommand.class
     })

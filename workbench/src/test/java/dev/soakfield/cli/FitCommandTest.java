@@ -1,0 +1,172 @@
+package dev.soakfield.cli;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.soakfield.fem.fit.PlaneSheetUptake;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class FitCommandTest {
+  @TempDir Path dir;
+
+  private Path sample(String name) throws Exception {
+    Path p = dir.resolve(name);
+    try (InputStream in = FitCommandTest.class.getResourceAsStream("/samples/" + name)) {
+      Files.copy(in, p);
+    }
+    return p;
+  }
+
+  private static JsonNode json(CliRun r) throws Exception {
+    assertEquals(0, r.exitCode(), r.err());
+    return new ObjectMapper().readTree(r.out());
+  }
+
+  private static boolean covers(JsonNode estimate, double x) {
+    return estimate.get("low").asDouble() <= x && x <= estimate.get("high").asDouble();
+  }
+
+  @Test
+  void bundledWeighingDataGiveBackTheirParameters() throws Exception {
+    Path csv = sample("coupon-soak-weighing.csv");
+    Path png = dir.resolve("fit.png");
+    CliRun text =
+        CliRun.of(
+            "fit",
+            csv.toString(),
+            "--thickness",
+            "1mm",
+            "--edges",
+            "40mm,40mm",
+            "--plot",
+            png.toString());
+    assertEquals(0, text.exitCode(), text.err());
+    assertTrue(text.out().contains("diffusivity"), text.out());
+    assertTrue(text.out().contains("half-time estimate"), text.out());
+    assertTrue(text.out().contains("caution:"), text.out());
+    assertTrue(text.out().contains("licensed engineering judgement"), text.out());
+    byte[] head = Arrays.copyOf(Files.readAllBytes(png), 8);
+    // PNG signature (W3C PNG specification, §5.2)
+    assertArrayEquals(new byte[] {(byte) 0x89, 'P', 'N', 'G', 13, 10, 26, 10}, head);
+
+    JsonNode j =
+        json(
+            CliRun.of(
+                "fit", csv.toString(), "--thickness", "1mm", "--edges", "40mm,40mm", "--json"));
+    // the file's comment states D = 3.0e-12 m^2/s and 0.35 wt% (synthetic data of our own)
+    assertTrue(covers(j.get("diffusivity"), 3.0e-12), j.get("diffusivity").toString());
+    assertTrue(covers(j.get("saturation"), 0.0035), j.get("saturation").toString());
+    assertEquals(17, j.get("points").size());
+    assertTrue(j.get("cautions").size() >= 2);
+    assertEquals(3, j.get("diffusivity").size(), "value, low, high");
+  }
+
+  @Test
+  void helpShowsThePercentSign() {
+    CliRun r = CliRun.of("fit", "--help");
+    assertEquals(0, r.exitCode(), r.err());
+    assertTrue(r.out().contains("95 % confidence intervals"), r.out());
+    assertTrue(r.out().contains("--permeation"), r.out());
+  }
+
+  @Test
+  void bundledPermeationTransientGivesBackItsParameters() throws Exception {
+    Path csv = sample("membrane-permeation.csv");
+    JsonNode j =
+        json(CliRun.of("fit", "--permeation", csv.toString(), "--thickness", "0.5mm", "--json"));
+    // stated in the file: D = 4.0e-10 m^2/s, J_ss = 1.0e-6 mol/(m^2 s), so C0 = J_ss·L/D = 1.25
+    assertTrue(covers(j.get("diffusivity"), 4.0e-10), j.get("diffusivity").toString());
+    assertTrue(covers(j.get("fittedSteadyFlux"), 1.0e-6), j.toString());
+    assertTrue(covers(j.get("saturation"), 1.25), j.get("saturation").toString());
+    assertEquals(4.0e-10, j.get("integratedDiffusivity").asDouble(), 0.05 * 4.0e-10);
+    // the background row, 0.05 uA/cm^2 = 5e-4 A/m^2, divided by F (CODATA 2018)
+    assertEquals(5e-4 / 96485.33212, j.get("background").asDouble(), 1e-15);
+  }
+
+  @Test
+  void desorptionAndGivenDryMass() throws Exception {
+    double l = 2e-3;
+    double d = 1.5e-12;
+    double dry = 5.0e-3; // kg
+    double water = 0.012 * dry;
+    Random rnd = new Random(3);
+    StringBuilder b = new StringBuilder("# synthetic\ntime [h],mass [g]\n0,");
+    b.append(String.format(Locale.ROOT, "%.6f%n", (dry + water) * 1e3));
+    for (int i = 1; i <= 25; i++) {
+      double t = 3600.0 * i * i * 0.8;
+      double m = dry + water * (1 - PlaneSheetUptake.fraction(d * t / (l * l)));
+      m += 0.03e-6 * rnd.nextGaussian();
+      b.append(String.format(Locale.ROOT, "%.4f,%.7f%n", t / 3600, m * 1e3));
+    }
+    Path csv = Files.writeString(dir.resolve("dry.csv"), b.toString());
+    JsonNode j =
+        json(
+            CliRun.of(
+                "fit",
+                csv.toString(),
+                "--thickness",
+                "2 mm",
+                "--desorption",
+                "--json",
+                "--dry-mass",
+                "5 g"));
+    assertTrue(covers(j.get("diffusivity"), d), j.get("diffusivity").toString());
+    assertTrue(covers(j.get("saturation"), 0.012), j.get("saturation").toString());
+    assertEquals(dry, j.get("dryMass").asDouble(), 1e-12);
+  }
+
+  @Test
+  void arrheniusFromTemperaturesInCelsius() throws Exception {
+    // exact D = D0·exp(−Q/(R·T)) with D0 = 4.7e-6 m^2/s, Q = 42 kJ/mol, R = 8.314462618 (CODATA)
+    StringBuilder b = new StringBuilder("temperature [degC],diffusivity [m^2/s]\n");
+    for (double c : new double[] {25, 45, 65, 85}) {
+      double dd = 4.7e-6 * Math.exp(-42e3 / (8.314462618 * (c + 273.15)));
+      b.append(String.format(Locale.ROOT, "%.1f,%.10e%n", c, dd));
+    }
+    Path csv = Files.writeString(dir.resolve("arr.csv"), b.toString());
+    JsonNode j = json(CliRun.of("fit", "--arrhenius", csv.toString(), "--json"));
+    assertEquals(42e3, j.get("activationEnergy").get("value").asDouble(), 1e-3);
+    assertEquals(4.7e-6, j.get("D0").get("value").asDouble(), 1e-12);
+  }
+
+  @Test
+  void badCsvNamesFileLineFoundAndExpected() throws Exception {
+    Path bad =
+        Files.writeString(dir.resolve("bad.csv"), "# c\ntime [h],mass [mg]\n0,1000\n1,12x\n");
+    CliRun r = CliRun.of("fit", bad.toString(), "--thickness", "1mm");
+    assertEquals(ExitCodes.BAD_INPUT, r.exitCode());
+    assertTrue(r.err().contains("bad.csv: line 4"), r.err());
+    assertTrue(r.err().contains("'12x'") && r.err().contains("expected a finite number"), r.err());
+    assertFalse(r.err().contains("at dev.soakfield"), r.err());
+
+    Path header = Files.writeString(dir.resolve("h.csv"), "hours,grams\n0,1\n");
+    CliRun h = CliRun.of("fit", header.toString(), "--thickness", "1mm");
+    assertEquals(ExitCodes.BAD_INPUT, h.exitCode());
+    assertTrue(h.err().contains("line 1") && h.err().contains("expected time"), h.err());
+
+    Path unit = Files.writeString(dir.resolve("u.csv"), "time [h],mass [K]\n0,1\n");
+    CliRun u = CliRun.of("fit", unit.toString(), "--thickness", "1mm");
+    assertEquals(ExitCodes.BAD_INPUT, u.exitCode());
+    assertTrue(u.err().contains("[Θ]") && u.err().contains("kg"), u.err());
+
+    Path few = Files.writeString(dir.resolve("f.csv"), "time,mass\n0,1\n1,1.1\n");
+    CliRun f = CliRun.of("fit", few.toString(), "--thickness", "1mm");
+    assertEquals(ExitCodes.BAD_INPUT, f.exitCode());
+    assertTrue(f.err().contains("at least"), f.err());
+
+    CliRun t = CliRun.of("fit", few.toString(), "--thickness", "1 kg");
+    assertEquals(ExitCodes.BAD_INPUT, t.exitCode());
+    assertTrue(t.err().contains("--thickness"), t.err());
+  }
+}
