@@ -57,7 +57,7 @@ class ExposureRunTest {
         run(
             """
             { "mesh": "box.msh", "law": "henry",
-              "exposure": [ { "duration": 1e6, "temperature": 358.15, "humidity": 0.85 } ],
+              "exposure": [ { "duration": "277.78 h", "temperature": "85 degC", "humidity": "85 %%" } ],
               "materials": { "body": { "diffusivity": 1e-11, "solubility": %s } },
               %s
               "initial": 0 }
@@ -83,8 +83,8 @@ class ExposureRunTest {
         run(
             """
             { "mesh": "box.msh", "law": "sieverts",
-              "exposure": [ { "duration": 1e6, "temperature": 300, "pressure": 1e7 } ],
-              "materials": { "body": { "diffusivity": 1e-11, "solubility": %s } },
+              "exposure": [ { "duration": 1e6, "temperature": 300, "pressure": "10 MPa" } ],
+              "materials": { "body": { "diffusivity": "0.036 mm^2/h", "solubility": %s } },
               %s
               "initial": 0 }
             """
@@ -123,7 +123,7 @@ class ExposureRunTest {
                             { "duration": 500, "temperature": [300, 400] },
                             { "duration": 2000, "temperature": 350 } ],
               "materials": {
-                "mould": { "diffusivity": { "D0": 1e-6, "Q": 3e4 },
+                "mould": { "diffusivity": { "D0": 1e-6, "Q": "30 kJ/mol" },
                            "solubility": { "S0": 50, "dH": 1e4 } },
                 "die":   { "diffusivity": { "D0": 1e-7, "Q": 2e4 },
                            "solubility": { "S0": 2, "dH": -5e3 } } },
