@@ -1,6 +1,7 @@
 package dev.soakfield.fem.run;
 
 import dev.soakfield.fem.casefile.CaseSpec;
+import dev.soakfield.fem.casefile.StepControl;
 import dev.soakfield.fem.casefile.StopSpec;
 import dev.soakfield.fem.casefile.TimeScheme;
 import dev.soakfield.fem.casefile.TimeSpec;
@@ -23,6 +24,9 @@ import java.util.stream.Stream;
  * time at which the target is met.
  */
 public final class BakeSearch {
+  /** The loosest step-error tolerance a bake search runs with. */
+  public static final double BAKE_TOLERANCE = 1e-4;
+
   private BakeSearch() {}
 
   /**
@@ -162,14 +166,14 @@ public final class BakeSearch {
                     sieverts ? oven.pressure() : Double.NaN,
                     sieverts ? oven.pressure() : Double.NaN)));
     TimeSpec old = spec.time();
+    // the bake time is only as good as the transient: adaptive steps at least as tight as 1e-4
+    StepControl steps = old.steps();
+    if (steps instanceof StepControl.Adaptive a && a.tolerance() > BAKE_TOLERANCE) {
+      steps = new StepControl.Adaptive(BAKE_TOLERANCE, a.initialStep(), a.maxStep());
+    }
     TimeSpec time =
         new TimeSpec(
-            duration,
-            List.of(duration),
-            TimeScheme.BACKWARD_EULER,
-            old.capacity(),
-            old.steps(),
-            stop);
+            duration, List.of(duration), TimeScheme.BACKWARD_EULER, old.capacity(), steps, stop);
     return new RunPipeline.Prepared(
         spec.withEnvironment(Optional.of(oneSegment), time), base.mesh(), base.warnings());
   }
