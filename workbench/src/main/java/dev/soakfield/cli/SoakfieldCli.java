@@ -16,6 +16,7 @@ import picocli.CommandLine.Command;
       DemoCommand.class,
       VerifyCommand.class,
       BenchCommand.class,
+      PluginsCommand.class,
       CommandLine.HelpCommand.class
     })
 public final class SoakfieldCli implements Runnable {

@@ -140,7 +140,10 @@ public final class LawBinding {
       return "a finite value from " + format(p.minimum()) + " to " + format(p.maximum()) + unit;
     }
     if (low) {
-      return "a finite value ≥ " + format(p.minimum()) + unit;
+      return (p.minimum() > 0 && p.minimum() < 1e-200
+              ? "a finite value > 0"
+              : "a finite value ≥ " + format(p.minimum()))
+          + unit;
     }
     if (high) {
       return "a finite value ≤ " + format(p.maximum()) + unit;
