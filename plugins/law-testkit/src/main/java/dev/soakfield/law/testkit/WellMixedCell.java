@@ -1,6 +1,7 @@
 package dev.soakfield.law.testkit;
 
 import dev.soakfield.fem.spi.SourceLaw;
+import java.util.function.DoubleUnaryOperator;
 
 /**
  * One well-mixed volume without diffusion, where dc/dt = π(c, state): the zero-dimensional problem
@@ -11,7 +12,7 @@ import dev.soakfield.fem.spi.SourceLaw;
 public final class WellMixedCell {
   private final SourceLaw law;
   private final boolean closed;
-  private final double temperature;
+  private DoubleUnaryOperator temperatureAt;
   private double concentration;
   private double[] state;
   private double time;
@@ -20,7 +21,7 @@ public final class WellMixedCell {
   private WellMixedCell(SourceLaw law, double c, double temperature, boolean closed) {
     this.law = law;
     this.closed = closed;
-    this.temperature = temperature;
+    this.temperatureAt = t -> temperature;
     this.concentration = c;
     this.state = new double[law.stateNames().size()];
     law.initialState(c, temperature, state);
@@ -34,6 +35,12 @@ public final class WellMixedCell {
   /** A cell whose concentration stays c, starting with the law's initial state for c. */
   public static WellMixedCell heldAt(SourceLaw law, double c, double temperature) {
     return new WellMixedCell(law, c, temperature, false);
+  }
+
+  /** Temperature as a function of time from now on (a heating ramp), K. */
+  public WellMixedCell withTemperature(DoubleUnaryOperator temperatureAt) {
+    this.temperatureAt = temperatureAt;
+    return this;
   }
 
   /** Replaces the state (for a start out of equilibrium). */
@@ -53,6 +60,7 @@ public final class WellMixedCell {
    */
   public void step(double dt) {
     State start = new State(state);
+    double temperature = temperatureAt.applyAsDouble(time + dt);
     double c0 = concentration;
     double c = c0;
     iterations = 0;
@@ -66,7 +74,8 @@ public final class WellMixedCell {
         if (++iterations > 50) {
           throw new IllegalStateException("Newton did not converge at t = " + (time + dt));
         }
-        c = lineSearch(start, c0, c, residual, -residual / (1 - dt * a.derivative()), dt);
+        double update = -residual / (1 - dt * a.derivative());
+        c = lineSearch(start, c0, c, residual, update, dt, temperature);
       }
     }
     double[] end = new double[state.length];
@@ -78,7 +87,13 @@ public final class WellMixedCell {
 
   /** The Newton update, halved until the residual decreases (at most 30 times). */
   private double lineSearch(
-      State start, double c0, double c, double residual, double update, double dt) {
+      State start,
+      double c0,
+      double c,
+      double residual,
+      double update,
+      double dt,
+      double temperature) {
     double step = update;
     for (int i = 0; i < 30; i++) {
       double trial = c + step;
@@ -105,7 +120,7 @@ public final class WellMixedCell {
 
   /** The law's held amount for the current state. */
   public double held() {
-    return law.heldAmount(new State(state), temperature);
+    return law.heldAmount(new State(state), temperatureAt.applyAsDouble(time));
   }
 
   public double time() {

@@ -109,4 +109,75 @@ class KineticTrapLawTest {
     assertTrue(full[0] <= 1 && full[0] > 0.999, "θ " + full[0]);
     assertEquals(3.0 * full[0], law.heldAmount(new State(full), 300), 1e-15);
   }
+
+  @Test
+  void thermalDesorptionPeaksFollowKissinger() {
+    // Kissinger, Anal. Chem. 29 (1957) 1702; for hydrogen traps Choo & Lee, Metall. Trans. A 13
+    // (1982) 135: when release limits desorption (lattice concentration near 0, no recapture), the
+    // peak temperature T_p of a constant heating rate β obeys β·Ed/(R·T_p²) = p0·exp(−Ed/(R·T_p)),
+    // so ln(β/T_p²) against 1/T_p is a line of slope −Ed/R
+    double ed = 60e3;
+    double p0 = 1e6;
+    KineticTrapLaw law = new KineticTrapLaw(1.0, 1.0, 0, p0, ed);
+    double[] betas = {0.01, 0.02, 0.05, 0.1};
+    double[] x = new double[betas.length];
+    double[] y = new double[betas.length];
+    for (int i = 0; i < betas.length; i++) {
+      double beta = betas[i];
+      double t0 = 250;
+      double dt = 0.05 / beta; // 0.05 K a step
+      WellMixedCell cell =
+          WellMixedCell.heldAt(law, 0, t0).withState(1.0).withTemperature(t -> t0 + beta * t);
+      double[] rate = new double[8000];
+      double held = cell.held();
+      for (int n = 0; n < rate.length; n++) {
+        cell.step(dt);
+        rate[n] = (held - cell.held()) / dt;
+        held = cell.held();
+      }
+      int m = 1;
+      for (int n = 1; n < rate.length - 1; n++) {
+        if (rate[n] > rate[m]) {
+          m = n;
+        }
+      }
+      assertTrue(m > 1 && m < rate.length - 2, "peak inside the ramp");
+      // vertex of the parabola through the three largest rates; rate[n] belongs to mid-step
+      double shift = 0.5 * (rate[m - 1] - rate[m + 1]) / (rate[m - 1] - 2 * rate[m] + rate[m + 1]);
+      double tp = t0 + 0.05 * (m + 0.5 + shift);
+      double kissinger = kissingerPeak(beta, ed, p0);
+      assertEquals(kissinger, tp, 0.1, "peak temperature at β = " + beta + " K/s");
+      x[i] = 1 / tp;
+      y[i] = Math.log(beta / (tp * tp));
+    }
+    double slope = leastSquaresSlope(x, y);
+    assertEquals(-ed / R, slope, 0.002 * ed / R, "Kissinger slope");
+  }
+
+  /** Solves β·E/(R·T²) = p0·exp(−E/(R·T)) for T by Newton on its logarithm. */
+  private static double kissingerPeak(double beta, double e, double p0) {
+    double t = 400;
+    for (int i = 0; i < 50; i++) {
+      double f = Math.log(beta * e / (R * t * t)) - Math.log(p0) + e / (R * t);
+      double df = -2 / t - e / (R * t * t);
+      t -= f / df;
+    }
+    return t;
+  }
+
+  private static double leastSquaresSlope(double[] x, double[] y) {
+    double mx = 0;
+    double my = 0;
+    for (int i = 0; i < x.length; i++) {
+      mx += x[i] / x.length;
+      my += y[i] / x.length;
+    }
+    double sxy = 0;
+    double sxx = 0;
+    for (int i = 0; i < x.length; i++) {
+      sxy += (x[i] - mx) * (y[i] - my);
+      sxx += (x[i] - mx) * (x[i] - mx);
+    }
+    return sxy / sxx;
+  }
 }
