@@ -1,5 +1,7 @@
 package dev.soakfield.fem.casefile;
 
+import dev.soakfield.fem.physics.ExposureHistory;
+import dev.soakfield.fem.physics.Law;
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -13,7 +15,19 @@ import java.util.Set;
 /** Turns the tree of a case file into a {@link CaseSpec}, collecting every independent problem. */
 final class CaseBinder {
   private static final Set<String> TOP_KEYS =
-      Set.of("mesh", "elements", "materials", "faces", "initial", "time", "probes", "threshold");
+      Set.of(
+          "$schema",
+          "mesh",
+          "elements",
+          "law",
+          "temperature",
+          "exposure",
+          "materials",
+          "faces",
+          "initial",
+          "time",
+          "probes",
+          "threshold");
 
   private final CaseFields fields;
   private final Path caseFile;
@@ -31,6 +45,7 @@ final class CaseBinder {
     return spec.orElseThrow(() -> new IllegalStateException("no case and no problem reported"));
   }
 
+  @SuppressWarnings("OptionalMapToOptional") // empty: a problem; inner empty: no such key
   private Optional<CaseSpec> top(CaseNode root) {
     Optional<CaseNode.Obj> found = fields.object(root, "", "a JSON object (the case)");
     if (found.isEmpty()) {
@@ -62,10 +77,54 @@ final class CaseBinder {
         CaseFields.optional(obj, "initial")
             .map(n -> initial(n, materials))
             .orElse(Optional.of(InitialSpec.uniform(0)));
-    Optional<TimeSpec> time =
-        fields
-            .required(obj, "", "time", "an object with end")
-            .flatMap(n -> new TimeBinder(fields).bind(n, "time"));
+    Optional<Law> law =
+        CaseFields.optional(obj, "law")
+            .map(n -> fields.word(n, "law", Law.values(), Law::word))
+            .orElse(Optional.of(Law.PLAIN));
+    double temperature = Double.NaN;
+    boolean temperatureOk = true;
+    Optional<CaseNode> tNode = CaseFields.optional(obj, "temperature");
+    if (tNode.isPresent()) {
+      OptionalDouble t =
+          fields.positiveQuantity(
+              tNode.get(), "temperature", "K", "a temperature above 0 K (\"85 degC\")");
+      temperatureOk = t.isPresent();
+      temperature = t.orElse(Double.NaN);
+    }
+    double startTemperature = temperature;
+    Optional<Optional<ExposureHistory>> exposure =
+        CaseFields.optional(obj, "exposure")
+            .map(
+                n ->
+                    new ExposureBinder(fields)
+                        .bind(n, "exposure", startTemperature)
+                        .map(Optional::of))
+            .orElse(Optional.of(Optional.empty()));
+    OptionalDouble historyEnd =
+        exposure
+            .flatMap(e -> e)
+            .map(e -> OptionalDouble.of(e.end()))
+            .orElse(OptionalDouble.empty());
+    Optional<TimeSpec> time;
+    if (historyEnd.isPresent() && !obj.members().containsKey("time")) {
+      double end = historyEnd.getAsDouble();
+      time =
+          Optional.of(
+              new TimeSpec(
+                  end,
+                  List.of(end),
+                  TimeScheme.BACKWARD_EULER,
+                  CapacityForm.CONSISTENT,
+                  new StepControl.Adaptive(
+                      StepControl.DEFAULT_TOLERANCE,
+                      OptionalDouble.empty(),
+                      OptionalDouble.empty())));
+    } else {
+      time =
+          fields
+              .required(obj, "", "time", "an object with end")
+              .flatMap(n -> new TimeBinder(fields).bind(n, "time", historyEnd));
+    }
     Optional<List<ProbeSpec>> probes =
         CaseFields.optional(obj, "probes").map(this::probes).orElse(Optional.of(List.of()));
     Optional<OptionalDouble> threshold = Optional.of(OptionalDouble.empty());
@@ -76,6 +135,9 @@ final class CaseBinder {
       threshold = t.isPresent() ? Optional.of(t) : Optional.empty();
     }
     if (mesh.isEmpty()
+        || law.isEmpty()
+        || !temperatureOk
+        || exposure.isEmpty()
         || elements.isEmpty()
         || materials.isEmpty()
         || faces.isEmpty()
@@ -96,7 +158,10 @@ final class CaseBinder {
             time.get(),
             probes.get(),
             threshold.get(),
-            PlaceIndex.of(root)));
+            PlaceIndex.of(root),
+            law.get(),
+            temperature,
+            exposure.get()));
   }
 
   private Optional<Path> mesh(CaseNode node) {
@@ -124,6 +189,21 @@ final class CaseBinder {
     Optional<CaseNode.Obj> obj = fields.object(node, "initial", expected);
     if (obj.isEmpty()) {
       return Optional.empty();
+    }
+    if (obj.get().members().containsKey("from")) {
+      fields.onlyKeys(obj.get(), "initial", Set.of("from"));
+      Optional<String> from =
+          fields.text(
+              obj.get().members().get("from").value(),
+              "initial.from",
+              "the result folder of an earlier run (a string)");
+      if (from.isEmpty()) {
+        return Optional.empty();
+      }
+      Path folder = caseFile.toAbsolutePath().getParent();
+      Path given = Path.of(from.get());
+      return Optional.of(
+          InitialSpec.fromResults(folder == null ? given : folder.resolve(given).normalize()));
     }
     Map<String, Double> values = new LinkedHashMap<>();
     boolean ok = true;

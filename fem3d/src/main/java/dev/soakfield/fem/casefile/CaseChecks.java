@@ -33,8 +33,9 @@ public final class CaseChecks {
     String meshName = String.valueOf(spec.mesh().getFileName());
     checkVolumeGroups(spec, mesh, meshName, problems);
     checkFaceGroups(spec, mesh, meshName, problems);
-    problems.throwIfAny();
     List<String> warnings = new ArrayList<>();
+    EnvironmentChecks.check(spec, problems, warnings);
+    problems.throwIfAny();
     for (FaceGroup g : mesh.faceGroups()) {
       if (g.kind() == FaceGroupKind.EXTERIOR && !spec.faces().containsKey(g.name())) {
         warnings.add("face group '" + g.name() + "' has no entry in faces: sealed by default");

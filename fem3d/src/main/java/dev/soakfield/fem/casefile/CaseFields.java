@@ -1,5 +1,7 @@
 package dev.soakfield.fem.casefile;
 
+import dev.soakfield.fem.units.SiValue;
+import dev.soakfield.fem.units.UnitException;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -76,6 +78,54 @@ final class CaseFields {
     return OptionalDouble.empty();
   }
 
+  /**
+   * A number in SI, or a string with a unit ("168 h", "85 degC") converted to {@code siUnit}; a
+   * wrong or unknown unit is a problem that names both.
+   */
+  OptionalDouble quantity(CaseNode node, String path, String siUnit, String expected) {
+    if (node instanceof CaseNode.Text t) {
+      try {
+        double v = SiValue.parse(t.value(), siUnit);
+        if (Double.isFinite(v)) {
+          return OptionalDouble.of(v);
+        }
+      } catch (UnitException e) {
+        problems.found(
+            node,
+            path,
+            expected
+                + " (a number in "
+                + siUnit
+                + " or a value with a unit"
+                + " of the same kind: "
+                + e.expected()
+                + ")");
+        return OptionalDouble.empty();
+      }
+    }
+    return number(node, path, expected);
+  }
+
+  /** A positive {@link #quantity}. */
+  OptionalDouble positiveQuantity(CaseNode node, String path, String siUnit, String expected) {
+    OptionalDouble v = quantity(node, path, siUnit, expected);
+    if (v.isPresent() && !(v.getAsDouble() > 0)) {
+      problems.found(node, path, expected);
+      return OptionalDouble.empty();
+    }
+    return v;
+  }
+
+  /** A non-negative {@link #quantity}. */
+  OptionalDouble nonNegativeQuantity(CaseNode node, String path, String siUnit, String expected) {
+    OptionalDouble v = quantity(node, path, siUnit, expected);
+    if (v.isPresent() && v.getAsDouble() < 0) {
+      problems.found(node, path, expected);
+      return OptionalDouble.empty();
+    }
+    return v;
+  }
+
   OptionalDouble positive(CaseNode node, String path, String expected) {
     OptionalDouble v = number(node, path, expected);
     if (v.isPresent() && !(v.getAsDouble() > 0)) {
@@ -126,6 +176,11 @@ final class CaseFields {
 
   /** Exactly {@code n} finite numbers: an array such as [x, y, z]. */
   Optional<double[]> numbers(CaseNode node, String path, int n, String expected) {
+    return numbers(node, path, n, expected, new String[0]);
+  }
+
+  /** Exactly {@code n} values, item i a {@link #quantity} in {@code units[i]} when given. */
+  Optional<double[]> numbers(CaseNode node, String path, int n, String expected, String[] units) {
     if (!(node instanceof CaseNode.Arr arr) || arr.items().size() != n) {
       problems.found(node, path, expected);
       return Optional.empty();
@@ -133,7 +188,10 @@ final class CaseFields {
     double[] out = new double[n];
     boolean ok = true;
     for (int i = 0; i < n; i++) {
-      OptionalDouble v = number(arr.items().get(i), CasePaths.item(path, i), "a finite number");
+      OptionalDouble v =
+          i < units.length
+              ? quantity(arr.items().get(i), CasePaths.item(path, i), units[i], "a finite number")
+              : number(arr.items().get(i), CasePaths.item(path, i), "a finite number");
       ok &= v.isPresent();
       out[i] = v.orElse(0);
     }
@@ -146,10 +204,20 @@ final class CaseFields {
    * @param minimum smallest value accepted, or -infinity
    */
   Optional<TimeTable> table(CaseNode node, String path, double minimum, String what) {
+    return table(node, path, minimum, what, "");
+  }
+
+  /**
+   * A {@link #table} whose values may carry units of {@code siUnit} (times always may, in s); an
+   * empty unit means plain numbers.
+   */
+  Optional<TimeTable> table(
+      CaseNode node, String path, double minimum, String what, String siUnit) {
     String bound = minimum == Double.NEGATIVE_INFINITY ? "" : " ≥ " + minimum;
     String expected = what + bound + " or a time table [[t, value], ...]";
-    if (node instanceof CaseNode.Num) {
-      OptionalDouble v = number(node, path, expected);
+    if (node instanceof CaseNode.Num || (node instanceof CaseNode.Text && !siUnit.isEmpty())) {
+      OptionalDouble v =
+          siUnit.isEmpty() ? number(node, path, expected) : quantity(node, path, siUnit, expected);
       if (v.isPresent() && v.getAsDouble() < minimum) {
         problems.found(node, path, expected);
         return Optional.empty();
@@ -166,7 +234,13 @@ final class CaseFields {
     boolean ok = true;
     for (int i = 0; i < n; i++) {
       String rowPath = CasePaths.item(path, i);
-      Optional<double[]> row = numbers(arr.items().get(i), rowPath, 2, "a row [t, value]");
+      Optional<double[]> row =
+          numbers(
+              arr.items().get(i),
+              rowPath,
+              2,
+              "a row [t, value]",
+              siUnit.isEmpty() ? new String[] {"s"} : new String[] {"s", siUnit});
       if (row.isEmpty()) {
         ok = false;
         continue;

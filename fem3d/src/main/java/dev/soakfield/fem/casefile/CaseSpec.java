@@ -1,11 +1,16 @@
 package dev.soakfield.fem.casefile;
 
+import dev.soakfield.fem.physics.DiffusionModel;
+import dev.soakfield.fem.physics.ExposureHistory;
+import dev.soakfield.fem.physics.Law;
+import dev.soakfield.fem.physics.TimeFunction;
 import java.nio.file.Path;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 /**
@@ -22,6 +27,9 @@ import java.util.OptionalDouble;
  * @param probes points to record
  * @param threshold the concentration whose first arrival is reported, when given
  * @param places where each key path's value stands in the file
+ * @param law how the potential relates to the concentration and the environment
+ * @param temperature the constant temperature in K when the case gives one, else NaN
+ * @param exposure the exposure history, when the case gives one
  */
 public record CaseSpec(
     Path caseFile,
@@ -33,7 +41,10 @@ public record CaseSpec(
     TimeSpec time,
     List<ProbeSpec> probes,
     OptionalDouble threshold,
-    Map<String, SourcePlace> places) {
+    Map<String, SourcePlace> places,
+    Law law,
+    double temperature,
+    Optional<ExposureHistory> exposure) {
   public CaseSpec {
     Objects.requireNonNull(caseFile, "caseFile");
     Objects.requireNonNull(mesh, "mesh");
@@ -45,6 +56,17 @@ public record CaseSpec(
     probes = List.copyOf(probes);
     Objects.requireNonNull(threshold, "threshold");
     places = ordered(places);
+    Objects.requireNonNull(law, "law");
+    Objects.requireNonNull(exposure, "exposure");
+  }
+
+  /** The temperature over time: the exposure's, the constant one, or 20 °C. */
+  public TimeFunction temperatureHistory() {
+    if (exposure.isPresent()) {
+      return exposure.get().temperatureFunction();
+    }
+    return TimeFunction.constant(
+        Double.isNaN(temperature) ? DiffusionModel.ROOM_TEMPERATURE : temperature);
   }
 
   private static <V> Map<String, V> ordered(Map<String, V> map) {

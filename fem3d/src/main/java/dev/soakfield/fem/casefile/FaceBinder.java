@@ -38,7 +38,7 @@ final class FaceBinder {
     String kindPath = CasePaths.child(path, "kind");
     Optional<FaceKind> kind =
         fields
-            .required(obj.get(), path, "kind", "concentration, flux, exchange or sealed")
+            .required(obj.get(), path, "kind", "concentration, flux, exchange, ambient or sealed")
             .flatMap(n -> fields.word(n, kindPath, FaceKind.values(), FaceKind::word));
     if (kind.isEmpty()) {
       fields.onlyKeys(obj.get(), path, Set.of("kind", "value", "coefficient"));
@@ -60,21 +60,33 @@ final class FaceBinder {
             .map(v -> new FaceSpec(group, FaceKind.FLUX, v, TimeTable.constant(0)));
       }
       case EXCHANGE -> exchange(group, obj.get(), path);
+      case AMBIENT -> {
+        fields.onlyKeys(obj.get(), path, Set.of("kind"));
+        yield Optional.of(
+            new FaceSpec(
+                group, FaceKind.AMBIENT, TimeTable.constant(0), TimeTable.constant(0), true));
+      }
     };
   }
 
   private Optional<FaceSpec> exchange(String group, CaseNode.Obj obj, String path) {
     fields.onlyKeys(obj, path, Set.of("kind", "value", "coefficient"));
-    Optional<TimeTable> value = value(obj, path, 0, "an environment concentration");
+    CaseNode.Member v = obj.members().get("value");
+    boolean ambient =
+        v != null && v.value() instanceof CaseNode.Text t && t.value().equals("ambient");
+    Optional<TimeTable> value =
+        ambient
+            ? Optional.of(TimeTable.constant(0))
+            : value(obj, path, 0, "an environment concentration (or \"ambient\")");
     String hPath = CasePaths.child(path, "coefficient");
     Optional<TimeTable> h =
         fields
             .required(obj, path, "coefficient", "a transfer coefficient (m/s)")
-            .flatMap(n -> fields.table(n, hPath, 0, "a transfer coefficient (m/s)"));
+            .flatMap(n -> fields.table(n, hPath, 0, "a transfer coefficient (m/s)", "m/s"));
     if (value.isEmpty() || h.isEmpty()) {
       return Optional.empty();
     }
-    return Optional.of(new FaceSpec(group, FaceKind.EXCHANGE, value.get(), h.get()));
+    return Optional.of(new FaceSpec(group, FaceKind.EXCHANGE, value.get(), h.get(), ambient));
   }
 
   private Optional<TimeTable> value(CaseNode.Obj obj, String path, double minimum, String what) {

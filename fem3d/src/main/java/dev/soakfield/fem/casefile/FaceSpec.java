@@ -12,8 +12,16 @@ import java.util.Objects;
  *     concentration (EXCHANGE); the constant 0 for SEALED
  * @param coefficient transfer coefficient h in m/s for EXCHANGE; the constant 0 for every other
  *     kind
+ * @param ambientValue the environment is the exposure's ambient (AMBIENT always; EXCHANGE with
+ *     {@code "value": "ambient"}), and {@code value} is unused
  */
-public record FaceSpec(String faceGroup, FaceKind kind, TimeTable value, TimeTable coefficient) {
+public record FaceSpec(
+    String faceGroup, FaceKind kind, TimeTable value, TimeTable coefficient, boolean ambientValue) {
+  /** A face condition with its own value (not the ambient's). */
+  public FaceSpec(String faceGroup, FaceKind kind, TimeTable value, TimeTable coefficient) {
+    this(faceGroup, kind, value, coefficient, kind == FaceKind.AMBIENT);
+  }
+
   public FaceSpec {
     Objects.requireNonNull(faceGroup, "faceGroup");
     Objects.requireNonNull(kind, "kind");

@@ -1,7 +1,9 @@
 package dev.soakfield.fem.casefile;
 
+import java.nio.file.Path;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 /**
@@ -10,13 +12,28 @@ import java.util.OptionalDouble;
  * @param uniform the value everywhere, when the case gives a single number
  * @param perGroup values by volume group name, when the case gives an object (empty otherwise)
  */
-public record InitialSpec(OptionalDouble uniform, Map<String, Double> perGroup) {
+public record InitialSpec(
+    OptionalDouble uniform, Map<String, Double> perGroup, Optional<Path> from) {
   public InitialSpec {
     Objects.requireNonNull(uniform, "uniform");
     perGroup = Map.copyOf(perGroup);
-    if (uniform.isPresent() == !perGroup.isEmpty()) {
-      throw new IllegalArgumentException("give either a uniform value or values per group");
+    Objects.requireNonNull(from, "from");
+    int given =
+        (uniform.isPresent() ? 1 : 0) + (perGroup.isEmpty() ? 0 : 1) + (from.isPresent() ? 1 : 0);
+    if (given != 1) {
+      throw new IllegalArgumentException(
+          "give one of a uniform value, values per group, or an earlier run's results");
     }
+  }
+
+  /** Uniform or per-group values. */
+  public InitialSpec(OptionalDouble uniform, Map<String, Double> perGroup) {
+    this(uniform, perGroup, Optional.empty());
+  }
+
+  /** The final state of an earlier run (its result folder), on the same mesh. */
+  public static InitialSpec fromResults(Path folder) {
+    return new InitialSpec(OptionalDouble.empty(), Map.of(), Optional.of(folder));
   }
 
   public static InitialSpec uniform(double value) {
@@ -25,6 +42,9 @@ public record InitialSpec(OptionalDouble uniform, Map<String, Double> perGroup) 
 
   /** The initial concentration in {@code volumeGroup}. */
   public double valueFor(String volumeGroup) {
+    if (from.isPresent()) {
+      throw new IllegalStateException("the initial state comes from " + from.get());
+    }
     if (uniform.isPresent()) {
       return uniform.getAsDouble();
     }

@@ -1,6 +1,8 @@
 package dev.soakfield.fem.casefile;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -8,8 +10,11 @@ import java.util.Set;
 
 /** Reads {@code materials}: diffusivity, solubility and source per volume group. */
 final class MaterialBinder {
-  private static final Set<String> MATERIAL_KEYS = Set.of("diffusivity", "solubility", "source");
-  private static final Set<String> TENSOR_KEYS = Set.of("principal", "axes");
+  private static final Set<String> MATERIAL_KEYS =
+      Set.of("diffusivity", "solubility", "source", "density");
+  private static final Set<String> TENSOR_KEYS = Set.of("principal", "axes", "D0", "Q");
+  private static final Set<String> SOLUBILITY_KEYS = Set.of("S0", "dH");
+  private static final String ENERGY = "an energy in J/mol (or with a unit: \"42 kJ/mol\")";
   private static final String POSITIVE_D = "a positive number (m²/s)";
   private static final double[][] XYZ = {{1, 0, 0}, {0, 1, 0}, {0, 0, 1}};
 
@@ -59,32 +64,127 @@ final class MaterialBinder {
     }
     fields.onlyKeys(obj.get(), path, MATERIAL_KEYS);
     String dPath = CasePaths.child(path, "diffusivity");
+    double[] dEnergy = {0};
     Optional<Diffusivity> d =
         fields
             .required(obj.get(), path, "diffusivity", POSITIVE_D + " or {principal, axes}")
-            .flatMap(n -> diffusivity(n, dPath));
+            .flatMap(n -> diffusivity(n, dPath, dEnergy));
     OptionalDouble s = OptionalDouble.of(1.0);
+    double[] sEnergy = {0};
     Optional<CaseNode> sNode = CaseFields.optional(obj.get(), "solubility");
     if (sNode.isPresent()) {
-      s = fields.positive(sNode.get(), CasePaths.child(path, "solubility"), "a positive number");
+      s = solubility(sNode.get(), CasePaths.child(path, "solubility"), sEnergy);
     }
+    OptionalDouble density = OptionalDouble.empty();
+    boolean densityOk = true;
+    Optional<CaseNode> rhoNode = CaseFields.optional(obj.get(), "density");
+    if (rhoNode.isPresent()) {
+      density =
+          fields.positiveQuantity(
+              rhoNode.get(), CasePaths.child(path, "density"), "kg/m^3", "a density in kg/m³");
+      densityOk = density.isPresent();
+    }
+    List<SourceSpec.LawSource> laws = new ArrayList<>();
     Optional<SourceSpec> source =
         CaseFields.optional(obj.get(), "source")
-            .map(n -> source(n, CasePaths.child(path, "source")))
+            .map(n -> sources(n, CasePaths.child(path, "source"), laws))
             .orElse(Optional.of(new SourceSpec.NoSource()));
-    if (d.isEmpty() || s.isEmpty() || source.isEmpty()) {
+    if (d.isEmpty() || s.isEmpty() || source.isEmpty() || !densityOk) {
       return Optional.empty();
     }
-    return Optional.of(new MaterialSpec(group, d.get(), s.getAsDouble(), source.get()));
+    return Optional.of(
+        new MaterialSpec(
+            group, d.get(), s.getAsDouble(), source.get(), dEnergy[0], sEnergy[0], density, laws));
   }
 
-  private Optional<Diffusivity> diffusivity(CaseNode node, String path) {
+  /** A number, or {S0, dH}: the prefactor and the heat of solution into {@code energy[0]}. */
+  private OptionalDouble solubility(CaseNode node, String path, double[] energy) {
+    String expected = "a positive number, or {\"S0\": ..., \"dH\": ...}";
+    if (!(node instanceof CaseNode.Obj obj)) {
+      return fields.positive(node, path, expected);
+    }
+    fields.onlyKeys(obj, path, SOLUBILITY_KEYS);
+    OptionalDouble s0 =
+        fields
+            .required(obj, path, "S0", "a positive prefactor")
+            .map(n -> fields.positive(n, CasePaths.child(path, "S0"), "a positive prefactor"))
+            .orElse(OptionalDouble.empty());
+    OptionalDouble dh =
+        fields
+            .required(obj, path, "dH", ENERGY)
+            .map(n -> fields.quantity(n, CasePaths.child(path, "dH"), "J/mol", ENERGY))
+            .orElse(OptionalDouble.empty());
+    if (s0.isEmpty() || dh.isEmpty()) {
+      return OptionalDouble.empty();
+    }
+    energy[0] = dh.getAsDouble();
+    return s0;
+  }
+
+  /** One source object or an array of them: built-in kinds and catalog laws. */
+  private Optional<SourceSpec> sources(
+      CaseNode node, String path, List<SourceSpec.LawSource> laws) {
+    if (!(node instanceof CaseNode.Arr arr)) {
+      return source(node, path, laws);
+    }
+    SourceSpec builtIn = new SourceSpec.NoSource();
+    boolean ok = true;
+    for (int i = 0; i < arr.items().size(); i++) {
+      String itemPath = CasePaths.item(path, i);
+      Optional<SourceSpec> one = source(arr.items().get(i), itemPath, laws);
+      ok &= one.isPresent();
+      if (one.isPresent() && !(one.get() instanceof SourceSpec.NoSource)) {
+        if (!(builtIn instanceof SourceSpec.NoSource)) {
+          fields
+              .problems()
+              .found(
+                  arr.items().get(i),
+                  itemPath,
+                  "at most one built-in kind (constant, first-order)"
+                      + " per material; further sources as laws");
+          ok = false;
+        }
+        builtIn = one.get();
+      }
+    }
+    return ok ? Optional.of(builtIn) : Optional.empty();
+  }
+
+  private Optional<Diffusivity> diffusivity(CaseNode node, String path, double[] energy) {
     if (!(node instanceof CaseNode.Obj obj)) {
       OptionalDouble d =
-          fields.positive(node, path, POSITIVE_D + " or {\"principal\": [...], \"axes\": [...]}");
+          fields.positiveQuantity(
+              node,
+              path,
+              "m^2/s",
+              POSITIVE_D + " or {\"principal\": [...], \"axes\": [...]} or {\"D0\", \"Q\"}");
       return d.isPresent() ? Optional.of(Diffusivity.isotropic(d.getAsDouble())) : Optional.empty();
     }
     fields.onlyKeys(obj, path, TENSOR_KEYS);
+    if (obj.members().containsKey("Q")) {
+      OptionalDouble q =
+          fields.quantity(
+              obj.members().get("Q").value(), CasePaths.child(path, "Q"), "J/mol", ENERGY);
+      if (q.isEmpty()) {
+        return Optional.empty();
+      }
+      energy[0] = q.getAsDouble();
+    }
+    if (obj.members().containsKey("D0") || !obj.members().containsKey("principal")) {
+      if (obj.members().containsKey("principal")) {
+        fields.problems().found(obj, path, "either D0 (isotropic) or principal (orthotropic)");
+        return Optional.empty();
+      }
+      String d0Path = CasePaths.child(path, "D0");
+      OptionalDouble d0 =
+          fields
+              .required(obj, path, "D0", POSITIVE_D)
+              .map(n -> fields.positiveQuantity(n, d0Path, "m^2/s", POSITIVE_D))
+              .orElse(OptionalDouble.empty());
+      return d0.isPresent()
+          ? Optional.of(Diffusivity.isotropic(d0.getAsDouble()))
+          : Optional.empty();
+    }
     String pPath = CasePaths.child(path, "principal");
     Optional<double[]> principal =
         fields.required(obj, path, "principal", "[d1, d2, d3]").flatMap(n -> principal(n, pPath));
@@ -100,7 +200,13 @@ final class MaterialBinder {
   }
 
   private Optional<double[]> principal(CaseNode node, String path) {
-    Optional<double[]> p = fields.numbers(node, path, 3, "[d1, d2, d3] of positive numbers");
+    Optional<double[]> p =
+        fields.numbers(
+            node,
+            path,
+            3,
+            "[d1, d2, d3] of positive numbers",
+            new String[] {"m^2/s", "m^2/s", "m^2/s"});
     if (p.isEmpty()) {
       return p;
     }
@@ -149,10 +255,18 @@ final class MaterialBinder {
     return Optional.of(axes);
   }
 
-  private Optional<SourceSpec> source(CaseNode node, String path) {
-    Optional<CaseNode.Obj> obj = fields.object(node, path, "an object with kind");
+  private Optional<SourceSpec> source(CaseNode node, String path, List<SourceSpec.LawSource> laws) {
+    Optional<CaseNode.Obj> obj = fields.object(node, path, "an object with kind or law");
     if (obj.isEmpty()) {
       return Optional.empty();
+    }
+    if (obj.get().members().containsKey("law")) {
+      return law(obj.get(), path)
+          .map(
+              l -> {
+                laws.add(l);
+                return new SourceSpec.NoSource();
+              });
     }
     String kindPath = CasePaths.child(path, "kind");
     Optional<SourceKind> kind =
@@ -173,7 +287,11 @@ final class MaterialBinder {
     OptionalDouble rate =
         fields
             .required(obj.get(), path, "rate", "a number (" + unit + ")")
-            .map(n -> fields.number(n, ratePath, "a finite number (" + unit + ")"))
+            .map(
+                n ->
+                    kind.get() == SourceKind.CONSTANT
+                        ? fields.number(n, ratePath, "a finite number (" + unit + ")")
+                        : fields.quantity(n, ratePath, "1/s", "a finite number (" + unit + ")"))
             .orElse(OptionalDouble.empty());
     if (rate.isEmpty()) {
       return Optional.empty();
@@ -182,5 +300,32 @@ final class MaterialBinder {
         kind.get() == SourceKind.CONSTANT
             ? new SourceSpec.ConstantRate(rate.getAsDouble())
             : new SourceSpec.FirstOrder(rate.getAsDouble()));
+  }
+
+  /** {"law": id, name: value, ...}: values stay as given (numbers or unit strings). */
+  private Optional<SourceSpec.LawSource> law(CaseNode.Obj obj, String path) {
+    String lawPath = CasePaths.child(path, "law");
+    Optional<String> id =
+        fields.text(
+            obj.members().get("law").value(), lawPath, "a law id (soakfield plugins lists them)");
+    Map<String, Object> params = new LinkedHashMap<>();
+    boolean ok = id.isPresent();
+    for (CaseNode.Member m : obj.members().values()) {
+      if (m.key().equals("law")) {
+        continue;
+      }
+      String p = CasePaths.child(path, m.key());
+      if (m.value() instanceof CaseNode.Num num && Double.isFinite(num.value())) {
+        params.put(m.key(), num.value());
+      } else if (m.value() instanceof CaseNode.Text t) {
+        params.put(m.key(), t.value());
+      } else {
+        fields.problems().found(m.value(), p, "a number or a value with a unit");
+        ok = false;
+      }
+    }
+    return ok
+        ? Optional.of(new SourceSpec.LawSource(id.get(), params, path, obj.line(), obj.column()))
+        : Optional.empty();
   }
 }

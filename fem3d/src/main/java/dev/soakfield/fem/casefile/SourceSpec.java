@@ -39,4 +39,29 @@ public sealed interface SourceSpec {
       return "first-order";
     }
   }
+
+  /**
+   * A law from the source-law catalog (built in or a plugin), named by its id, with its parameters
+   * as the case gives them.
+   *
+   * @param id the law's id
+   * @param parameters parameter name → a number (SI) or a string with a unit, in file order
+   * @param path the key path of this source in the case file, for messages
+   * @param line line of the source object, 0 when unknown
+   * @param column column of the source object, 0 when unknown
+   */
+  record LawSource(
+      String id, java.util.Map<String, Object> parameters, String path, int line, int column)
+      implements SourceSpec {
+    public LawSource {
+      java.util.Objects.requireNonNull(id, "id");
+      parameters = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(parameters));
+      java.util.Objects.requireNonNull(path, "path");
+    }
+
+    @Override
+    public String kind() {
+      return "law";
+    }
+  }
 }

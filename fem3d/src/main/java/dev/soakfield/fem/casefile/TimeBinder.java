@@ -10,8 +10,16 @@ import java.util.Set;
 final class TimeBinder {
   private static final Set<String> KEYS =
       Set.of(
-          "end", "outputs", "scheme", "capacity", "tolerance", "step", "initial_step", "max_step");
-  private static final String SECONDS = "a positive number of seconds";
+          "end",
+          "outputs",
+          "scheme",
+          "capacity",
+          "tolerance",
+          "step",
+          "initial_step",
+          "max_step",
+          "stop");
+  private static final String SECONDS = "a positive duration (seconds, or with a unit: \"168 h\")";
 
   private final CaseFields fields;
 
@@ -19,7 +27,11 @@ final class TimeBinder {
     this.fields = fields;
   }
 
-  Optional<TimeSpec> bind(CaseNode node, String path) {
+  /**
+   * @param historyEnd the end of the exposure history, the default end time when present
+   */
+  @SuppressWarnings("OptionalMapToOptional") // empty: a problem; inner empty: no such key
+  Optional<TimeSpec> bind(CaseNode node, String path, OptionalDouble historyEnd) {
     Optional<CaseNode.Obj> found = fields.object(node, path, "an object with end");
     if (found.isEmpty()) {
       return Optional.empty();
@@ -27,11 +39,16 @@ final class TimeBinder {
     CaseNode.Obj obj = found.get();
     fields.onlyKeys(obj, path, KEYS);
     String endPath = CasePaths.child(path, "end");
-    OptionalDouble end =
-        fields
-            .required(obj, path, "end", SECONDS)
-            .map(n -> fields.positive(n, endPath, SECONDS))
-            .orElse(OptionalDouble.empty());
+    OptionalDouble end;
+    if (historyEnd.isPresent() && !obj.members().containsKey("end")) {
+      end = historyEnd;
+    } else {
+      end =
+          fields
+              .required(obj, path, "end", SECONDS)
+              .map(n -> fields.positiveQuantity(n, endPath, "s", SECONDS))
+              .orElse(OptionalDouble.empty());
+    }
     Optional<List<Double>> outputs = Optional.empty();
     if (end.isPresent()) {
       outputs =
@@ -57,7 +74,12 @@ final class TimeBinder {
                         CapacityForm::word))
             .orElse(Optional.of(CapacityForm.CONSISTENT));
     Optional<StepControl> steps = steps(obj, path);
-    if (end.isEmpty()
+    Optional<Optional<StopSpec>> stop =
+        CaseFields.optional(obj, "stop")
+            .map(n -> stop(n, CasePaths.child(path, "stop")).map(Optional::of))
+            .orElse(Optional.of(Optional.empty()));
+    if (stop.isEmpty()
+        || end.isEmpty()
         || outputs.isEmpty()
         || scheme.isEmpty()
         || capacity.isEmpty()
@@ -65,7 +87,40 @@ final class TimeBinder {
       return Optional.empty();
     }
     return Optional.of(
-        new TimeSpec(end.getAsDouble(), outputs.get(), scheme.get(), capacity.get(), steps.get()));
+        new TimeSpec(
+            end.getAsDouble(),
+            outputs.get(),
+            scheme.get(),
+            capacity.get(),
+            steps.get(),
+            stop.get()));
+  }
+
+  private Optional<StopSpec> stop(CaseNode node, String path) {
+    String expected = "an object {\"group\" or \"probe\": name, \"below\" or \"above\": level}";
+    Optional<CaseNode.Obj> obj = fields.object(node, path, expected);
+    if (obj.isEmpty()) {
+      return Optional.empty();
+    }
+    fields.onlyKeys(obj.get(), path, Set.of("group", "probe", "below", "above"));
+    var m = obj.get().members();
+    if (m.containsKey("group") == m.containsKey("probe")
+        || m.containsKey("below") == m.containsKey("above")) {
+      fields.problems().found(node, path, expected);
+      return Optional.empty();
+    }
+    String target = m.containsKey("group") ? "group" : "probe";
+    String direction = m.containsKey("below") ? "below" : "above";
+    Optional<String> name =
+        fields.text(m.get(target).value(), CasePaths.child(path, target), "a name");
+    OptionalDouble level =
+        fields.number(
+            m.get(direction).value(), CasePaths.child(path, direction), "a concentration level");
+    if (name.isEmpty() || level.isEmpty()) {
+      return Optional.empty();
+    }
+    return Optional.of(
+        new StopSpec(target, name.get(), direction.equals("below"), level.getAsDouble()));
   }
 
   private Optional<List<Double>> outputs(CaseNode node, String path, double end) {
@@ -81,7 +136,7 @@ final class TimeBinder {
       String itemPath = CasePaths.item(path, i);
       String bounds =
           "a time in (" + CaseFields.plain(previous) + ", " + CaseFields.plain(end) + "]";
-      OptionalDouble t = fields.number(item, itemPath, bounds);
+      OptionalDouble t = fields.quantity(item, itemPath, "s", bounds);
       if (t.isEmpty()) {
         return Optional.empty();
       }
@@ -144,7 +199,7 @@ final class TimeBinder {
         }
       }
       OptionalDouble length =
-          fields.positive(step.get().value(), CasePaths.child(path, "step"), SECONDS);
+          fields.positiveQuantity(step.get().value(), CasePaths.child(path, "step"), "s", SECONDS);
       return ok && length.isPresent()
           ? Optional.of(new StepControl.Fixed(length.getAsDouble()))
           : Optional.empty();
@@ -177,7 +232,7 @@ final class TimeBinder {
     if (member.isEmpty()) {
       return OptionalDouble.empty();
     }
-    return fields.positive(
-        member.get().value(), CasePaths.child(path, member.get().key()), SECONDS);
+    return fields.positiveQuantity(
+        member.get().value(), CasePaths.child(path, member.get().key()), "s", SECONDS);
   }
 }

@@ -17,6 +17,10 @@ public final class DiffusionModel {
   private final double[] constantRate;
   private final List<FaceCondition> faces;
   private final double[] initialPhi;
+  private final int[] tetMaterial;
+  private final List<MaterialBehaviour> materials;
+  private final TimeFunction temperature;
+  private final Law law;
 
   /**
    * @param space the unknowns
@@ -43,7 +47,60 @@ public final class DiffusionModel {
     this.constantRate = check(constantRate, tets, "constantRate");
     this.faces = List.copyOf(faces);
     this.initialPhi = check(initialPhi, space.dofCount(), "initialPhi");
+    this.tetMaterial = new int[tets];
+    this.materials = List.of(MaterialBehaviour.constant("all"));
+    this.temperature = TimeFunction.constant(ROOM_TEMPERATURE);
+    this.law = Law.PLAIN;
   }
+
+  /**
+   * A model whose coefficients follow the temperature history and whose materials may carry source
+   * laws.
+   *
+   * @param solubility S per tetrahedron at the reference temperature {@code temperature.at(0)}
+   * @param conductance D·S per tetrahedron at the reference temperature
+   * @param tetMaterial index into {@code materials} per tetrahedron
+   * @param materials how each material's coefficients change with temperature, and its laws
+   * @param temperature the temperature history, K
+   * @param law how φ relates to c and to the environment
+   */
+  public DiffusionModel(
+      FeSpace space,
+      double[] solubility,
+      double[] conductance,
+      double[] firstOrderRate,
+      double[] constantRate,
+      List<FaceCondition> faces,
+      double[] initialPhi,
+      int[] tetMaterial,
+      List<MaterialBehaviour> materials,
+      TimeFunction temperature,
+      Law law) {
+    this.space = Objects.requireNonNull(space, "space");
+    int tets = space.mesh().tetCount();
+    this.solubility = check(solubility, tets, "solubility");
+    this.conductance = check(conductance, 6 * tets, "conductance");
+    this.firstOrderRate = check(firstOrderRate, tets, "firstOrderRate");
+    this.constantRate = check(constantRate, tets, "constantRate");
+    this.faces = List.copyOf(faces);
+    this.initialPhi = check(initialPhi, space.dofCount(), "initialPhi");
+    if (tetMaterial.length != tets) {
+      throw new IllegalArgumentException(
+          "tetMaterial has " + tetMaterial.length + " entries, expected " + tets);
+    }
+    this.materials = List.copyOf(materials);
+    for (int m : tetMaterial) {
+      if (m < 0 || m >= this.materials.size()) {
+        throw new IllegalArgumentException("material index " + m + " out of range");
+      }
+    }
+    this.tetMaterial = tetMaterial.clone();
+    this.temperature = Objects.requireNonNull(temperature, "temperature");
+    this.law = Objects.requireNonNull(law, "law");
+  }
+
+  /** 20 °C, the temperature of a model that names none (common practice for "room temperature"). */
+  public static final double ROOM_TEMPERATURE = 293.15;
 
   private static double[] check(double[] a, int length, String what) {
     if (a.length != length) {
@@ -82,6 +139,89 @@ public final class DiffusionModel {
   /** A copy of the initial potential. */
   public double[] initialPhi() {
     return initialPhi.clone();
+  }
+
+  /** Material index per tetrahedron (shared; do not modify). */
+  public int[] tetMaterial() {
+    return tetMaterial;
+  }
+
+  public List<MaterialBehaviour> materials() {
+    return materials;
+  }
+
+  /** The temperature history, K. */
+  public TimeFunction temperature() {
+    return temperature;
+  }
+
+  /** The temperature at which the per-tetrahedron coefficients hold, K. */
+  public double referenceTemperature() {
+    return temperature.at(0);
+  }
+
+  public Law law() {
+    return law;
+  }
+
+  /** True when some coefficient changes during the run (temperature varies and matters). */
+  public boolean coefficientsVary() {
+    boolean matters = false;
+    for (MaterialBehaviour m : materials) {
+      matters |= m.dependsOnTemperature();
+    }
+    if (!matters) {
+      return false;
+    }
+    double t0 = temperature.at(0);
+    for (double b : temperature.breakpoints()) {
+      if (temperature.at(b) != t0) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  /** True when some material carries a source law. */
+  public boolean hasSourceLaws() {
+    for (MaterialBehaviour m : materials) {
+      if (!m.laws().isEmpty()) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  /** S per tetrahedron at a temperature (a new array). */
+  public double[] solubilityAt(double kelvin) {
+    double tRef = referenceTemperature();
+    double[] ratio = new double[materials.size()];
+    for (int m = 0; m < ratio.length; m++) {
+      ratio[m] = materials.get(m).solubilityRatio(kelvin, tRef);
+    }
+    double[] s = new double[solubility.length];
+    for (int t = 0; t < s.length; t++) {
+      s[t] = solubility[t] * ratio[tetMaterial[t]];
+    }
+    return s;
+  }
+
+  /** D·S per tetrahedron at a temperature (a new array, 6 numbers each). */
+  public double[] conductanceAt(double kelvin) {
+    double tRef = referenceTemperature();
+    double[] ratio = new double[materials.size()];
+    for (int m = 0; m < ratio.length; m++) {
+      MaterialBehaviour b = materials.get(m);
+      ratio[m] = b.solubilityRatio(kelvin, tRef) * b.diffusivityRatio(kelvin, tRef);
+    }
+    double[] k = new double[conductance.length];
+    for (int t = 0; t < solubility.length; t++) {
+      double r = ratio[tetMaterial[t]];
+      for (int j = 0; j < 6; j++) {
+        k[6 * t + j] = conductance[6 * t + j] * r;
+      }
+    }
+    return k;
   }
 
   public boolean hasFirstOrderSource() {

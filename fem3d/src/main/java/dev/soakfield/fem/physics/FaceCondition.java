@@ -11,6 +11,7 @@ public final class FaceCondition {
   private final TimeFunction coefficient;
   private final int[] faces;
   private final double[] faceSolubility;
+  private final boolean valueIsPotential;
 
   /**
    * A condition on the faces of one group.
@@ -31,6 +32,24 @@ public final class FaceCondition {
       TimeFunction coefficient,
       int[] faces,
       double[] faceSolubility) {
+    this(group, name, kind, value, coefficient, faces, faceSolubility, kind == FaceKind.AMBIENT);
+  }
+
+  /**
+   * A condition whose value may be a potential rather than a concentration.
+   *
+   * @param valueIsPotential the value is φ_env (the ambient potential; c_env = S·φ_env next to each
+   *     face), not c_env; always true for AMBIENT
+   */
+  public FaceCondition(
+      int group,
+      String name,
+      FaceKind kind,
+      TimeFunction value,
+      TimeFunction coefficient,
+      int[] faces,
+      double[] faceSolubility,
+      boolean valueIsPotential) {
     this.group = group;
     this.name = Objects.requireNonNull(name, "name");
     this.kind = Objects.requireNonNull(kind, "kind");
@@ -38,6 +57,7 @@ public final class FaceCondition {
     this.coefficient = Objects.requireNonNull(coefficient, "coefficient");
     this.faces = faces.clone();
     this.faceSolubility = faceSolubility.clone();
+    this.valueIsPotential = valueIsPotential || kind == FaceKind.AMBIENT;
     if (faceSolubility.length != faces.length) {
       throw new IllegalArgumentException("one solubility per face expected");
     }
@@ -57,6 +77,11 @@ public final class FaceCondition {
 
   public TimeFunction value() {
     return value;
+  }
+
+  /** True when {@link #value()} is a potential φ_env (ambient), false when a concentration. */
+  public boolean valueIsPotential() {
+    return valueIsPotential;
   }
 
   public TimeFunction coefficient() {

@@ -8,6 +8,11 @@ public enum FaceKind {
   FLUX("flux"),
   /** Inward flux h·(c_env − c) with transfer coefficient h in m/s (Robin). */
   EXCHANGE("exchange"),
+  /**
+   * The potential of the environment held on the faces (Dirichlet on φ): vapour partial pressure
+   * RH·p_sat(T) under Henry's law, √f of the gas under Sieverts' law.
+   */
+  AMBIENT("ambient"),
   /** No flux. */
   SEALED("sealed");
 

@@ -64,6 +64,18 @@ public final class GroupMonitor {
   }
 
   /** ∫ c dV per volume group. */
+  /**
+   * Takes the solubility at a new temperature (per tetrahedron, same layout): amounts and maxima
+   * from now on use it; first-arrival times already found stay.
+   */
+  public void updateSolubility(double[] perTet) {
+    System.arraycopy(perTet, 0, solubilityPerTet, 0, solubilityPerTet.length);
+    TetMesh mesh = assembler.space().mesh();
+    for (int t = 0; t < mesh.tetCount(); t++) {
+      groupSolubility[mesh.tetGroup(t)] = perTet[t];
+    }
+  }
+
   public double[] amounts(double[] phi) {
     return assembler.integratePerGroup(phi, solubilityPerTet);
   }

@@ -33,6 +33,11 @@ public final class ThresholdClock {
     return c;
   }
 
+  /** Takes the nodal solubility at a new temperature for the following steps. */
+  public void updateSolubility(double[] nodal) {
+    System.arraycopy(nodal, 0, nodalSolubility, 0, nodalSolubility.length);
+  }
+
   /** Records the step from t − dt to t that ended at potential phi. */
   public void step(double t, double dt, double[] phi) {
     double[] c = concentration(phi);

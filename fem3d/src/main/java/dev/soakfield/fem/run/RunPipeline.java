@@ -71,16 +71,23 @@ public final class RunPipeline {
     return new Prepared(spec, mesh, warnings);
   }
 
-  /** Runs the case and writes its results into {@code outDir}. */
+  /** Runs the case (without source-law plugins) and writes its results into {@code outDir}. */
   public static RunSummary run(Path caseFile, Path outDir, RunProgress progress)
+      throws IOException {
+    return run(caseFile, outDir, progress, LawResolver.none());
+  }
+
+  /** Runs the case and writes its results into {@code outDir}; {@code laws} resolves its laws. */
+  public static RunSummary run(Path caseFile, Path outDir, RunProgress progress, LawResolver laws)
       throws IOException {
     Prepared prepared = prepare(caseFile);
     CaseSpec spec = prepared.spec();
     TetMesh mesh = prepared.mesh();
     List<String> warnings = new ArrayList<>(prepared.warnings());
-    DiffusionModel model = ModelBuilder.build(spec, mesh, warnings);
+    DiffusionModel model = ModelBuilder.build(spec, mesh, warnings, laws);
     boolean lumped = spec.time().capacity() == CapacityForm.LUMPED;
     ThetaStepper stepper = new ThetaStepper(model, lumped, SOLVER_TOLERANCE, SOLVER_MAX_ITERATIONS);
+    continueLawStates(spec, mesh, stepper, warnings);
     TimeSettings settings = settings(spec);
 
     ResultFolder folder = ResultFolder.open(outDir);
@@ -103,6 +110,28 @@ public final class RunPipeline {
     } catch (IOException | RuntimeException e) {
       folder.discard();
       throw e;
+    }
+  }
+
+  /** A run that starts from an earlier one carries its source-law states over when they fit. */
+  private static void continueLawStates(
+      CaseSpec spec, TetMesh mesh, ThetaStepper stepper, List<String> warnings) {
+    if (spec.initial().from().isEmpty() || !stepper.hasSourceLaws()) {
+      return;
+    }
+    double[][] earlier =
+        ModelBuilder.earlierRun(spec, mesh, spec.initial().from().get()).lawStates();
+    double[][] now = stepper.lawStates();
+    boolean fits = earlier.length == now.length;
+    for (int k = 0; fits && k < now.length; k++) {
+      fits = earlier[k].length == now[k].length;
+    }
+    if (fits) {
+      stepper.restoreLawStates(earlier);
+    } else {
+      warnings.add(
+          "the earlier run's source-law states do not match this case's laws; they start in"
+              + " equilibrium with the initial concentration");
     }
   }
 

@@ -40,7 +40,17 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
   private final SeriesTable series;
   private final GroupMonitor groups;
   private final ThresholdClock clock;
-  private final double[] nodalS;
+  private final ThetaStepper stepper;
+  private double[] tetS;
+  private double[] nodalS;
+  private double temperatureNow;
+  private final double[] groupVolume;
+  private final double[] groupDensity; // NaN where a material gives none
+  private final double[] groupAmount0;
+  private double lastTime;
+  private double stoppedAt = Double.NaN;
+  private double[] lastMaxima;
+  private double[] lastProbes;
   private final List<Optional<PointLocator.Probe>> probes = new ArrayList<>();
   private final double[] probeFirst;
   private final double[] probePrevious;
@@ -69,12 +79,23 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
     this.progress = progress;
     this.warnings = warnings;
     this.end = spec.time().end();
+    this.stepper = stepper;
     double[] phi0 = model.initialPhi();
     stepper.applyPrescribed(phi0, 0.0);
     SystemAssembler asm = new SystemAssembler(model.space());
     double threshold = spec.threshold().orElse(Double.NaN);
-    groups = new GroupMonitor(asm, model.solubility(), threshold, phi0);
-    nodalS = NodalSolubility.of(mesh, model.solubility());
+    temperatureNow = model.referenceTemperature();
+    tetS = model.solubility();
+    groups = new GroupMonitor(asm, tetS, threshold, phi0);
+    nodalS = NodalSolubility.of(mesh, tetS);
+    double[] ones = new double[mesh.tetCount()];
+    java.util.Arrays.fill(ones, 1.0);
+    groupVolume = asm.integratePerGroup(filled(mesh.nodeCount(), 1.0), ones);
+    groupDensity = new double[mesh.volumeGroups().size()];
+    for (int g = 0; g < groupDensity.length; g++) {
+      var m = spec.materials().get(mesh.volumeGroups().get(g).name());
+      groupDensity[g] = m.density().orElse(Double.NaN);
+    }
     clock = new ThresholdClock(spec.threshold().orElse(Double.POSITIVE_INFINITY), nodalS, phi0);
     PointLocator locator = new PointLocator(model.space());
     for (ProbeSpec p : spec.probes()) {
@@ -97,8 +118,9 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
             .filter(g -> mesh.faceGroups().get(g).kind() == FaceGroupKind.EXTERIOR)
             .toArray();
     cumulativeInflow = new double[mesh.faceGroups().size()];
-    amount0 = stepper.amount(model.initialPhi()); // before held faces are raised
+    amount0 = stepper.amount(model.initialPhi(), 0.0); // before held faces are raised
     amountNow = amount0;
+    groupAmount0 = totalAmounts(model.initialPhi(), 0.0);
     Files.createDirectories(dir.resolve("fields"));
     series = new SeriesTable(dir.resolve("series.csv"), header());
   }
@@ -112,7 +134,8 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
         moved += Math.abs(raised[g]);
       }
       amountNow = initial.amount();
-      series.row(row(0.0, 0.0, initial.phi(), raised, groups.maxima(initial.phi())));
+      lastMaxima = groups.maxima(initial.phi());
+      series.row(row(0.0, 0.0, initial.phi(), raised, lastMaxima));
       writeFrame(0.0, initial.phi());
     } catch (IOException e) {
       throw new UncheckedIOException(e);
@@ -139,6 +162,20 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
       h.add("probe:" + p.name());
     }
     h.add("balance_error");
+    h.add("temperature");
+    if (stepper.hasSourceLaws()) {
+      h.add("lattice_amount");
+      h.add("trapped_amount");
+      for (var g : mesh.volumeGroups()) {
+        h.add("trapped:" + g.name());
+      }
+    }
+    if (hasDensities()) {
+      h.add("weight_gain_percent");
+      for (var g : mesh.volumeGroups()) {
+        h.add("weight_gain_percent:" + g.name());
+      }
+    }
     return h;
   }
 
@@ -154,7 +191,7 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
   private double[] row(double t, double dt, double[] phi, double[] stepInflow, double[] maxima) {
     List<Double> r = new ArrayList<>();
     r.add(t);
-    double[] amounts = groups.amounts(phi);
+    double[] amounts = totalAmounts(phi, t);
     double total = 0;
     for (double a : amounts) {
       total += a;
@@ -176,6 +213,31 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
       r.add(p);
     }
     r.add(balanceError());
+    r.add(temperatureNow);
+    if (stepper.hasSourceLaws()) {
+      double[] held = stepper.heldPerGroup(t);
+      double heldTotal = 0;
+      for (double v : held) {
+        heldTotal += v;
+      }
+      r.add(total - heldTotal);
+      r.add(heldTotal);
+      for (double v : held) {
+        r.add(v);
+      }
+    }
+    if (hasDensities()) {
+      double gained = 0;
+      double mass = 0;
+      for (int g = 0; g < amounts.length; g++) {
+        gained += amounts[g] - groupAmount0[g];
+        mass += groupDensity[g] * groupVolume[g];
+      }
+      r.add(100 * gained / mass);
+      for (int g = 0; g < amounts.length; g++) {
+        r.add(100 * (amounts[g] - groupAmount0[g]) / (groupDensity[g] * groupVolume[g]));
+      }
+    }
     return r.stream().mapToDouble(Double::doubleValue).toArray();
   }
 
@@ -205,7 +267,10 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
       sources += out.sourceAmount();
       moved += Math.abs(out.sourceAmount());
       amountNow = out.amount();
+      followTemperature(t);
       double[] maxima = groups.step(t, dt, phi);
+      lastMaxima = maxima;
+      lastTime = t;
       clock.step(t, dt, phi);
       double[] pv = probeValues(phi);
       for (int i = 0; i < pv.length; i++) {
@@ -215,6 +280,7 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
         }
       }
       System.arraycopy(pv, 0, probePrevious, 0, pv.length);
+      lastProbes = pv;
       series.row(row(t, dt, phi, inflow, maxima));
       if (output) {
         writeFrame(t, phi);
@@ -224,6 +290,85 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
+  }
+
+  /** Mobile plus held amount per volume group at time t. */
+  private double[] totalAmounts(double[] phi, double t) {
+    double[] a = groups.amounts(phi);
+    if (stepper.hasSourceLaws()) {
+      double[] held = stepper.heldPerGroup(t);
+      for (int g = 0; g < a.length; g++) {
+        a[g] += held[g];
+      }
+    }
+    return a;
+  }
+
+  private boolean hasDensities() {
+    for (double d : groupDensity) {
+      if (Double.isNaN(d)) {
+        return false;
+      }
+    }
+    return groupDensity.length > 0;
+  }
+
+  /** Carries the solubility to the temperature at t when it changed (c = S(T)·φ). */
+  private void followTemperature(double t) {
+    double kelvin = model.temperature().at(t);
+    if (kelvin == temperatureNow) {
+      return;
+    }
+    temperatureNow = kelvin;
+    if (model.coefficientsVary()) {
+      tetS = model.solubilityAt(kelvin);
+      nodalS = NodalSolubility.of(mesh, tetS);
+      groups.updateSolubility(tetS);
+      clock.updateSolubility(nodalS);
+    }
+  }
+
+  @Override
+  public boolean stopRequested() {
+    if (spec.time().stop().isEmpty() || lastMaxima == null) {
+      return false;
+    }
+    var stop = spec.time().stop().get();
+    double value;
+    if (stop.target().equals("group")) {
+      value = lastMaxima[mesh.volumeGroupIndex(stop.name())];
+    } else {
+      int i = 0;
+      while (i < spec.probes().size() && !spec.probes().get(i).name().equals(stop.name())) {
+        i++;
+      }
+      if (lastProbes == null || i >= lastProbes.length) {
+        return false;
+      }
+      value = lastProbes[i];
+    }
+    if (stop.met(value) && lastTime > 0) {
+      stoppedAt = lastTime;
+      return true;
+    }
+    return false;
+  }
+
+  private static double[] filled(int n, double v) {
+    double[] a = new double[n];
+    java.util.Arrays.fill(a, v);
+    return a;
+  }
+
+  private List<VtuWriter.Field> pointFields(double[] c, double[] phi, double t) {
+    List<VtuWriter.Field> f = new ArrayList<>();
+    f.add(new VtuWriter.Field("c", 1, c));
+    f.add(new VtuWriter.Field("phi", 1, phi.clone()));
+    f.add(new VtuWriter.Field("first_exceed", 1, clock.firstTimes()));
+    if (stepper.hasSourceLaws()) {
+      f.add(new VtuWriter.Field("trapped", 1, stepper.heldField(t)));
+    }
+    return f;
   }
 
   private void writeFrame(double t, double[] phi) throws IOException {
@@ -239,10 +384,7 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
     VtuWriter.write(
         dir.resolve(name),
         mesh,
-        List.of(
-            new VtuWriter.Field("c", 1, c),
-            new VtuWriter.Field("phi", 1, phi.clone()),
-            new VtuWriter.Field("first_exceed", 1, clock.firstTimes())),
+        pointFields(c, phi, t),
         List.of(new VtuWriter.Field("group", 1, group)),
         VtuFormat.APPENDED_BASE64,
         false);
@@ -250,7 +392,13 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
   }
 
   void finish(RunTotals totals) throws IOException {
+    if (!frames.isEmpty() && frames.get(frames.size() - 1).time() != totals.endTime()) {
+      writeFrame(totals.endTime(), totals.finalPhi()); // a stop condition ended the run early
+    }
     PvdWriter.write(dir.resolve("fields.pvd"), frames);
+    StateFile.write(
+        dir.resolve(StateFile.NAME),
+        new StateFile.State(totals.endTime(), totals.finalPhi(), stepper.lawStates()));
     Map<String, Object> root = new LinkedHashMap<>();
     root.put("case", spec.caseFile().toString());
     Map<String, Object> m = new LinkedHashMap<>();
@@ -263,7 +411,7 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
     solver.put("steps", totals.steps());
     solver.put("rejected_steps", totals.rejectedSteps());
     solver.put("linear_iterations", totals.linearIterations());
-    solver.put("end_time", end);
+    solver.put("end_time", totals.endTime());
     root.put("solver", solver);
     Map<String, Object> balance = new LinkedHashMap<>();
     balance.put("relative", balanceRelative());
@@ -287,6 +435,15 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
     first.put("probes", perProbe);
     threshold.put("first_time", first);
     root.put("threshold", spec.threshold().isPresent() ? threshold : null);
+    if (spec.time().stop().isPresent()) {
+      Map<String, Object> stop = new LinkedHashMap<>();
+      stop.put("condition", spec.time().stop().get().describe());
+      stop.put("met", !Double.isNaN(stoppedAt));
+      stop.put("time", Double.isNaN(stoppedAt) ? null : stoppedAt);
+      root.put("stop", stop);
+    }
+    root.put("law", model.law().word());
+    root.put("temperature_start", model.referenceTemperature());
     root.put("warnings", warnings);
     root.put(
         "caution",

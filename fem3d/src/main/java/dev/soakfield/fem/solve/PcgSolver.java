@@ -89,6 +89,22 @@ public final class PcgSolver {
     setupSeconds = (System.nanoTime() - start) * 1e-9;
   }
 
+  /**
+   * Declares a matrix of the same size and pattern for the following solves but keeps the current
+   * preconditioner: for a sequence of nearby matrices (Newton iterations) where rebuilding it would
+   * cost more than the few iterations a slightly stale one adds.
+   */
+  public void replaceMatrix(CsrMatrix a) {
+    Objects.requireNonNull(a, "matrix");
+    requireMatrix();
+    if (a.size() != matrix.size()) {
+      throw new IllegalArgumentException(
+          "matrix of size " + a.size() + " replaces one of size " + matrix.size());
+    }
+    matrix = a;
+    operator = new CsrOperator(a);
+  }
+
   /** The preconditioner built for the current matrix (JACOBI or AMG; never AUTO). */
   public PreconditionerKind activePreconditioner() {
     requireMatrix();

@@ -18,4 +18,9 @@ public interface StepListener {
    * {@code initial.faceInflow()} holds the amounts that raising added.
    */
   default void started(StepOutcome initial) {}
+
+  /** Asked after every accepted step: true ends the run there (a stop condition was met). */
+  default boolean stopRequested() {
+    return false;
+  }
 }

@@ -6,10 +6,14 @@ package dev.soakfield.fem.time;
  * @param phi the potential at the end of the step
  * @param faceInflow amount that entered through each face group during the step (by mesh face group
  *     index; 0 for sealed and interface groups)
- * @param sourceAmount amount produced by volume sources during the step (negative for sinks)
- * @param amount the total amount at the end of the step, 1ᵀ M φ
+ * @param sourceAmount net amount produced by volume sources during the step (negative for sinks);
+ *     what source laws move into or out of their held state is not production
+ * @param amount the total amount at the end of the step: 1ᵀ M φ plus what source laws hold
  * @param iterations linear solver iterations of the step
  * @param solveSeconds time spent in the linear solve (and any preconditioner set-up)
+ * @param newtonIterations Newton iterations of the step (0 without source laws)
+ * @param lawStates the source laws' states at the end of the step, pending until the stepper
+ *     commits them; null without source laws
  */
 @SuppressWarnings("ArrayRecordComponent") // handed from the stepper to listeners, read only
 public record StepOutcome(
@@ -18,4 +22,17 @@ public record StepOutcome(
     double sourceAmount,
     double amount,
     int iterations,
-    double solveSeconds) {}
+    double solveSeconds,
+    int newtonIterations,
+    double[][] lawStates) {
+  /** An outcome without source laws. */
+  public StepOutcome(
+      double[] phi,
+      double[] faceInflow,
+      double sourceAmount,
+      double amount,
+      int iterations,
+      double solveSeconds) {
+    this(phi, faceInflow, sourceAmount, amount, iterations, solveSeconds, 0, null);
+  }
+}

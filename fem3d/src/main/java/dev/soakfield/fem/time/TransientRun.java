@@ -42,7 +42,7 @@ public final class TransientRun {
 
     double[] phi = phiStart.clone();
     double[] raised = stepper.raise(phi, 0.0);
-    listener.started(new StepOutcome(phi.clone(), raised, 0.0, stepper.amount(phi), 0, 0.0));
+    listener.started(new StepOutcome(phi.clone(), raised, 0.0, stepper.amount(phi, 0.0), 0, 0.0));
     // error scale: the field's size, or what the boundary data will drive it to, whichever is
     // larger
     double scale = Math.max(maxAbs(phi), stepper.referencePotential());
@@ -66,6 +66,22 @@ public final class TransientRun {
       StepOutcome out;
       try {
         out = stepper.step(phi, t, tryDt, crank ? 0.5 : 1.0);
+      } catch (StepNotConvergedException e) {
+        // a nonlinear step that does not converge is retried a quarter as long
+        rejected++;
+        dt = ladder(ladderBase, tryDt * SHRINK_LIMIT);
+        if (dt < minStep || (!s.adaptive() && tryDt <= minStep)) {
+          throw new RunFailedException(
+              t,
+              e.getMessage()
+                  + "; the step cannot be shortened further. Check the source law's parameters"
+                  + " (rates, trap densities) for extreme values",
+              e);
+        }
+        if (!s.adaptive()) {
+          ladderBase = dt; // fixed steps: continue on the shorter step from here
+        }
+        continue;
       } catch (SolverStalledException e) {
         throw new RunFailedException(
             t,
@@ -114,6 +130,7 @@ public final class TransientRun {
       steps++;
       sinceRestart++;
       boolean isOutput = Arrays.binarySearch(outputs, tNew) >= 0 || tNew == end;
+      stepper.commit(out);
       listener.accepted(tNew, tryDt, out, isOutput);
       previous = phi;
       previousDt = tryDt;
@@ -121,6 +138,16 @@ public final class TransientRun {
       t = tNew;
       if (kinks.contains(t)) {
         previous = null; // the extrapolation does not hold across a kink of the boundary data
+        if (s.adaptive()) {
+          // the first step after a kink has no error estimate: start it short against what follows
+          Double following = targets.higher(t + minStep);
+          if (following != null) {
+            dt = Math.max(ladderBase, Math.min(dt, ladder(ladderBase, (following - t) / 16)));
+          }
+        }
+      }
+      if (listener.stopRequested()) {
+        return new RunTotals(steps, rejected, iterations, phi, t);
       }
       if (s.adaptive()) {
         double grow =
@@ -133,7 +160,7 @@ public final class TransientRun {
         }
       }
     }
-    return new RunTotals(steps, rejected, iterations, phi);
+    return new RunTotals(steps, rejected, iterations, phi, t);
   }
 
   /** The largest step of the ladder base·2^k not above dt. */

@@ -118,7 +118,9 @@ class CaseReaderTest {
     // wrong type
     assertEquals(5, p.get(1).line());
     assertEquals("materials.body.solubility", p.get(1).path());
-    assertEquals("found \"one\", expected a positive number", p.get(1).message());
+    assertEquals(
+        "found \"one\", expected a positive number, or {\"S0\": ..., \"dH\": ...}",
+        p.get(1).message());
 
     // unknown key with a suggestion, at the key
     assertEquals(8, p.get(2).line());
@@ -193,7 +195,9 @@ class CaseReaderTest {
     // a missing key is reported at the object that should hold it
     assertEquals("time.end", p.get(2).path());
     assertEquals(3, p.get(2).line());
-    assertEquals("missing; expected a positive number of seconds", p.get(2).message());
+    assertEquals(
+        "missing; expected a positive duration (seconds, or with a unit: \"168 h\")",
+        p.get(2).message());
     assertEquals("threshold", p.get(3).path());
     assertEquals(4, p.get(3).line());
   }
