@@ -56,9 +56,8 @@ final class RunCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     PrintWriter err = spec.commandLine().getErr();
     laws = SourceLawCatalog.load(PluginFolders.withDefault(plugins));
-    // the pipeline takes the catalog once the case binding resolves "source": {"law": ...}
     ProgressLine progress = new ProgressLine(err, quiet);
-    RunSummary s = RunPipeline.run(caseFile, out, progress);
+    RunSummary s = RunPipeline.run(caseFile, out, progress, laws.resolver());
     progress.done();
     if (!quiet) {
       report(spec.commandLine().getOut(), s);

@@ -69,6 +69,11 @@ public final class GuardedLaw {
     return new GuardedLaw(entry, material, law);
   }
 
+  /** The law itself, for a solver that checks its answers on its own. */
+  public SourceLaw law() {
+    return law;
+  }
+
   public String lawId() {
     return lawId;
   }

@@ -113,6 +113,15 @@ public final class SourceLawCatalog {
         .toString();
   }
 
+  /**
+   * The resolver the run pipeline uses for a case's {@code "source": {"law": ...}}: unknown ids and
+   * parameters that do not fit are {@link dev.soakfield.fem.casefile.CaseInputException}s at the
+   * source's place.
+   */
+  public dev.soakfield.fem.run.LawResolver resolver() {
+    return new CatalogLawResolver(this);
+  }
+
   /** The plugins folders searched, absolute, in the order given. */
   public List<Path> folders() {
     return folders;
