@@ -1,6 +1,8 @@
 package dev.soakfield.cli;
 
 import dev.soakfield.fem.casefile.CaseInputException;
+import dev.soakfield.fem.laws.PluginLoadException;
+import dev.soakfield.fem.laws.SourceLawException;
 import dev.soakfield.fem.solve.SolverStalledException;
 import dev.soakfield.fem.time.RunFailedException;
 import dev.soakfield.mesh.MeshInputException;
@@ -53,10 +55,13 @@ public final class ExitCodes {
   static int codeFor(Throwable ex) {
     if (ex instanceof MeshInputException
         || ex instanceof UserInputException
-        || ex instanceof CaseInputException) {
+        || ex instanceof CaseInputException
+        || ex instanceof PluginLoadException) {
       return BAD_INPUT;
     }
-    if (ex instanceof RunFailedException || ex instanceof SolverStalledException) {
+    if (ex instanceof RunFailedException
+        || ex instanceof SolverStalledException
+        || ex instanceof SourceLawException) {
       return NUMERICAL_FAILURE;
     }
     if (ex instanceof java.nio.file.NoSuchFileException

@@ -1,9 +1,13 @@
 package dev.soakfield.cli;
 
+import dev.soakfield.fem.laws.PluginFolders;
+import dev.soakfield.fem.laws.SourceLawCatalog;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunSummary;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -37,11 +41,23 @@ final class RunCommand implements Callable<Integer> {
   @Option(names = "--quiet", description = "Print nothing but errors.")
   boolean quiet;
 
+  @Option(
+      names = "--plugins",
+      paramLabel = "DIR",
+      description =
+          "A folder of source-law plugin jars, searched after ~/.soakfield/plugins; repeatable."
+              + " Plugins are code with full trust.")
+  List<Path> plugins = new ArrayList<>();
+
+  /** The laws this run may use; loaded before the run so that a broken plugin stops it early. */
+  SourceLawCatalog laws;
+
   @Override
   public Integer call() throws Exception {
     PrintWriter err = spec.commandLine().getErr();
+    laws = SourceLawCatalog.load(PluginFolders.withDefault(plugins));
     ProgressLine progress = new ProgressLine(err, quiet);
-    RunSummary s = RunPipeline.run(caseFile, out, progress);
+    RunSummary s = RunPipeline.run(caseFile, out, progress, laws.resolver());
     progress.done();
     if (!quiet) {
       report(spec.commandLine().getOut(), s);

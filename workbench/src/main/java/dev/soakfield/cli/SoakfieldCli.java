@@ -18,6 +18,7 @@ import picocli.CommandLine.Command;
       VerifyCommand.class,
       FitCommand.class,
       BenchCommand.class,
+      PluginsCommand.class,
       CommandLine.HelpCommand.class
     })
 public final class SoakfieldCli implements Runnable {

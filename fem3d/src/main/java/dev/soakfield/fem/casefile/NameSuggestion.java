@@ -5,11 +5,11 @@ import java.util.Locale;
 import java.util.Optional;
 
 /** The closest name to a misspelt one, by Levenshtein edit distance (case-insensitive). */
-final class NameSuggestion {
+public final class NameSuggestion {
   private NameSuggestion() {}
 
   /** The candidate with the smallest edit distance; empty when there are no candidates. */
-  static Optional<String> closest(String name, Collection<String> candidates) {
+  public static Optional<String> closest(String name, Collection<String> candidates) {
     String best = null;
     int bestDistance = Integer.MAX_VALUE;
     for (String c : candidates) {
@@ -26,7 +26,7 @@ final class NameSuggestion {
    * The closest candidate when it is close enough to be a likely typo: at most a third of the
    * longer name's letters differ, and never more than 3 (common practice for "did you mean").
    */
-  static Optional<String> likely(String name, Collection<String> candidates) {
+  public static Optional<String> likely(String name, Collection<String> candidates) {
     return closest(name, candidates)
         .filter(
             c -> {
@@ -36,7 +36,7 @@ final class NameSuggestion {
   }
 
   /** Levenshtein distance: fewest single-character insertions, deletions and substitutions. */
-  static int distance(String a, String b) {
+  public static int distance(String a, String b) {
     int[] previous = new int[b.length() + 1];
     int[] current = new int[b.length() + 1];
     for (int j = 0; j <= b.length(); j++) {

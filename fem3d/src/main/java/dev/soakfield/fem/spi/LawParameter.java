@@ -7,7 +7,9 @@ import java.util.Objects;
  *
  * @param name the key in the case file's {@code source} object
  * @param unit its SI unit as users write it ("1/s", "J/mol", "mol/m^3", "1" for a pure number);
- *     values given with another unit of the same dimension are converted to it
+ *     values given with another unit of the same dimension are converted to it; "amount" stands for
+ *     the case's own amount unit, the one of c in amount/m^3 ("amount/m^3" for a site density,
+ *     "m^3/(amount*s)" for a capture rate constant), and such values are taken as plain numbers
  * @param description one phrase for listings
  * @param defaultValue the value when the case omits the key; {@code NaN} when the key is required
  * @param minimum smallest accepted value (inclusive)

@@ -10,6 +10,11 @@
  * <p>Units: SI throughout, with concentrations in the case's own amount unit per m³ (the unit of c
  * = S·φ); temperatures in kelvin; times in seconds.
  *
+ * <p>Plugin authors test their law by extending {@code dev.soakfield.law.testkit.SourceLawContract}
+ * (artifact {@code law-testkit}); {@code plugins/example-law} in the repository is a complete
+ * plugin project to copy. Plugins are loaded from the plugins folders the user names and {@code
+ * ~/.soakfield/plugins}, never from anything a case file names.
+ *
  * <p>Changes to this package are additions only: existing methods keep their meaning.
  */
 package dev.soakfield.fem.spi;
