@@ -22,6 +22,23 @@ public final class TransientRun {
 
   public static RunTotals run(
       ThetaStepper stepper, double[] phiStart, TimeSettings s, StepListener listener) {
+    return run(stepper, phiStart, s, listener, CheckpointSink.NONE, null);
+  }
+
+  /**
+   * Runs from t = 0, or on from a checkpoint's cursor (then {@code phiStart} is ignored, nothing is
+   * raised and the listener hears no start: it restored its own state).
+   *
+   * @param checkpoints hears the state after every accepted step
+   * @param resume where an interrupted run stood, or null for a fresh run
+   */
+  public static RunTotals run(
+      ThetaStepper stepper,
+      double[] phiStart,
+      TimeSettings s,
+      StepListener listener,
+      CheckpointSink checkpoints,
+      RunCursor resume) {
     double end = s.end();
     TreeSet<Double> targets = new TreeSet<>();
     for (double t : s.outputs()) {
@@ -40,12 +57,8 @@ public final class TransientRun {
     double[] outputs = s.outputs();
     Arrays.sort(outputs);
 
-    double[] phi = phiStart.clone();
-    double[] raised = stepper.raise(phi, 0.0);
-    listener.started(new StepOutcome(phi.clone(), raised, 0.0, stepper.amount(phi, 0.0), 0, 0.0));
-    // error scale: the field's size, or what the boundary data will drive it to, whichever is
-    // larger
-    double scale = Math.max(maxAbs(phi), stepper.referencePotential());
+    double[] phi;
+    double scale;
     double[] previous = null;
     double previousDt = 0;
     double t = 0;
@@ -55,6 +68,26 @@ public final class TransientRun {
     int rejected = 0;
     int sinceRestart = 0;
     long iterations = 0;
+    if (resume == null) {
+      phi = phiStart.clone();
+      double[] raised = stepper.raise(phi, 0.0);
+      listener.started(new StepOutcome(phi.clone(), raised, 0.0, stepper.amount(phi, 0.0), 0, 0.0));
+      // error scale: the field's size, or what the boundary data will drive it to, whichever is
+      // larger
+      scale = Math.max(maxAbs(phi), stepper.referencePotential());
+    } else {
+      phi = resume.phi().clone();
+      scale = resume.scale();
+      previous = resume.previous() == null ? null : resume.previous().clone();
+      previousDt = resume.previousDt();
+      t = resume.t();
+      dt = resume.dt();
+      ladderBase = resume.ladderBase();
+      steps = resume.steps();
+      rejected = resume.rejected();
+      sinceRestart = resume.sinceRestart();
+      iterations = resume.iterations();
+    }
     double minStep = end * 1e-14;
     while (t < end) {
       double target = targets.ceiling(t + minStep);
@@ -159,6 +192,19 @@ public final class TransientRun {
           dt = ladder(ladderBase, Math.min(s.maxStep(), dt * grow));
         }
       }
+      checkpoints.accepted(
+          new RunCursor(
+              t,
+              dt,
+              ladderBase,
+              phi,
+              previous,
+              previousDt,
+              scale,
+              steps,
+              rejected,
+              sinceRestart,
+              iterations));
     }
     return new RunTotals(steps, rejected, iterations, phi, t);
   }
