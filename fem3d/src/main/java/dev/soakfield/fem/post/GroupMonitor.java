@@ -63,7 +63,6 @@ public final class GroupMonitor {
     }
   }
 
-  /** ∫ c dV per volume group. */
   /**
    * Takes the solubility at a new temperature (per tetrahedron, same layout): amounts and maxima
    * from now on use it; first-arrival times already found stay.
@@ -76,6 +75,18 @@ public final class GroupMonitor {
     }
   }
 
+  /** What the monitor has seen so far (first times, last maxima), for checkpoints. */
+  public double[][] snapshot() {
+    return new double[][] {firstTime.clone(), previousMax.clone()};
+  }
+
+  /** Continues from a {@link #snapshot()}. */
+  public void restore(double[][] state) {
+    System.arraycopy(state[0], 0, firstTime, 0, firstTime.length);
+    previousMax = state[1].clone();
+  }
+
+  /** ∫ c dV per volume group. */
   public double[] amounts(double[] phi) {
     return assembler.integratePerGroup(phi, solubilityPerTet);
   }

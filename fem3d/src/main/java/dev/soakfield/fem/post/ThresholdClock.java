@@ -38,6 +38,17 @@ public final class ThresholdClock {
     System.arraycopy(nodal, 0, nodalSolubility, 0, nodalSolubility.length);
   }
 
+  /** First times and last concentrations, for checkpoints. */
+  public double[][] snapshot() {
+    return new double[][] {firstTime.clone(), previousC.clone()};
+  }
+
+  /** Continues from a {@link #snapshot()}. */
+  public void restore(double[][] state) {
+    System.arraycopy(state[0], 0, firstTime, 0, firstTime.length);
+    previousC = state[1].clone();
+  }
+
   /** Records the step from t − dt to t that ended at potential phi. */
   public void step(double t, double dt, double[] phi) {
     double[] c = concentration(phi);

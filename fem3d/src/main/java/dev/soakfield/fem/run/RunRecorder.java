@@ -72,6 +72,22 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
       RunProgress progress,
       List<String> warnings)
       throws IOException {
+    this(dir, spec, model, stepper, progress, warnings, null);
+  }
+
+  /**
+   * A recorder that goes on from a checkpoint when {@code resume} is given: the series keeps the
+   * rows the checkpoint saw, and every accumulated figure comes back from it.
+   */
+  RunRecorder(
+      Path dir,
+      CaseSpec spec,
+      DiffusionModel model,
+      ThetaStepper stepper,
+      RunProgress progress,
+      List<String> warnings,
+      StateBundle resume)
+      throws IOException {
     this.dir = dir;
     this.spec = spec;
     this.model = model;
@@ -122,7 +138,14 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
     amountNow = amount0;
     groupAmount0 = totalAmounts(model.initialPhi(), 0.0);
     Files.createDirectories(dir.resolve("fields"));
-    series = new SeriesTable(dir.resolve("series.csv"), header());
+    series =
+        new SeriesTable(
+            dir.resolve("series.csv"),
+            header(),
+            resume == null ? -1 : (int) resume.scalar("rec.rows"));
+    if (resume != null) {
+      restore(resume);
+    }
   }
 
   @Override
@@ -289,6 +312,57 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
       progress.step(t, end, steps, 0);
     } catch (IOException e) {
       throw new UncheckedIOException(e);
+    }
+  }
+
+  /** Everything accumulated so far, into a checkpoint bundle (names start with "rec."). */
+  void snapshot(StateBundle b) throws IOException {
+    series.flush();
+    b.put("rec.rows", series.rows());
+    b.put("rec.inflow", cumulativeInflow);
+    b.put("rec.totals", amountNow, sources, moved, steps, temperatureNow, lastTime, stoppedAt);
+    double[][] g = groups.snapshot();
+    b.put("rec.group.first", g[0]).put("rec.group.max", g[1]);
+    double[][] c = clock.snapshot();
+    b.put("rec.clock.first", c[0]).put("rec.clock.previous", c[1]);
+    b.put("rec.probe.first", probeFirst).put("rec.probe.previous", probePrevious);
+    if (lastMaxima != null) {
+      b.put("rec.last.maxima", lastMaxima);
+    }
+    if (lastProbes != null) {
+      b.put("rec.last.probes", lastProbes);
+    }
+    double[] frameTimes = new double[frames.size()];
+    StringBuilder names = new StringBuilder();
+    for (int i = 0; i < frameTimes.length; i++) {
+      frameTimes[i] = frames.get(i).time();
+      names.append(i > 0 ? "\n" : "").append(frames.get(i).relativeFile());
+    }
+    b.put("rec.frames", frameTimes).putText("rec.frame.files", names.toString());
+  }
+
+  private void restore(StateBundle b) {
+    double[] inflow = b.get("rec.inflow");
+    System.arraycopy(inflow, 0, cumulativeInflow, 0, cumulativeInflow.length);
+    double[] t = b.get("rec.totals");
+    amountNow = t[0];
+    sources = t[1];
+    moved = t[2];
+    steps = (int) t[3];
+    followTemperature(t[5]);
+    lastTime = t[5];
+    stoppedAt = t[6];
+    groups.restore(new double[][] {b.get("rec.group.first"), b.get("rec.group.max")});
+    clock.restore(new double[][] {b.get("rec.clock.first"), b.get("rec.clock.previous")});
+    System.arraycopy(b.get("rec.probe.first"), 0, probeFirst, 0, probeFirst.length);
+    System.arraycopy(b.get("rec.probe.previous"), 0, probePrevious, 0, probePrevious.length);
+    lastMaxima = b.has("rec.last.maxima") ? b.get("rec.last.maxima") : null;
+    lastProbes = b.has("rec.last.probes") ? b.get("rec.last.probes") : null;
+    double[] times = b.get("rec.frames");
+    String[] files = b.text("rec.frame.files").split("\n", -1);
+    frames.clear();
+    for (int i = 0; i < times.length; i++) {
+      frames.add(new PvdEntry(times[i], files[i]));
     }
   }
 
