@@ -23,7 +23,12 @@ import picocli.CommandLine.Spec;
       "Copies the case and mesh into OUT/case and writes the results into OUT/results."
     })
 final class DemoCommand implements Callable<Integer> {
-  static final String[] FILES = {"sensor-pod.msh", "sensor-pod.case.json"};
+  static final String[] FILES = {
+    "sensor-pod.msh",
+    "sensor-pod.case.json",
+    "sensor-pod-humid.case.json",
+    "sensor-pod-bake.case.json"
+  };
 
   @Spec CommandSpec spec;
 

@@ -206,7 +206,7 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
     double[] v = new double[probes.size()];
     for (int i = 0; i < v.length; i++) {
       Optional<PointLocator.Probe> p = probes.get(i);
-      v[i] = p.isPresent() ? model.solubility()[p.get().tet()] * p.get().value(phi) : Double.NaN;
+      v[i] = p.isPresent() ? tetS[p.get().tet()] * p.get().value(phi) : Double.NaN;
     }
     return v;
   }

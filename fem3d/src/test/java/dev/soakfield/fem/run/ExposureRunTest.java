@@ -127,7 +127,8 @@ class ExposureRunTest {
                            "solubility": { "S0": 50, "dH": 1e4 } },
                 "die":   { "diffusivity": { "D0": 1e-7, "Q": 2e4 },
                            "solubility": { "S0": 2, "dH": -5e3 } } },
-              "initial": { "mould": 1.0, "die": 0.1 } }
+              "initial": { "mould": 1.0, "die": 0.1 },
+              "probes": { "inside": [0.0005, 0.0005, 0.0005] } }
             """);
     RunPipeline.run(caseFile, dir.resolve("out"), RunProgress.SILENT);
     JsonNode b = summary().get("balance");
@@ -139,11 +140,15 @@ class ExposureRunTest {
     List<String> header = List.of(lines.get(0).split(",", -1));
     int col = header.indexOf("balance_error");
     int temp = header.indexOf("temperature");
+    int probe = header.indexOf("probe:inside");
+    int max = header.indexOf("max:mould");
     double hottest = 0;
     for (String line : lines.subList(1, lines.size())) {
       String[] v = line.split(",", -1);
       assertTrue(Math.abs(Double.parseDouble(v[col])) <= 1e-10 * start, line);
       hottest = Math.max(hottest, Double.parseDouble(v[temp]));
+      // the probe reads c = S(T)·φ in the mould: never above the mould's largest nodal value
+      assertTrue(Double.parseDouble(v[probe]) <= Double.parseDouble(v[max]) * (1 + 1e-12), line);
     }
     assertEquals(400.0, hottest, 1e-9, "the ramp's end is a step end");
   }
