@@ -124,7 +124,7 @@ class ExposureRunTest {
                             { "duration": 2000, "temperature": 350 } ],
               "materials": {
                 "mould": { "diffusivity": { "D0": 1e-6, "Q": "30 kJ/mol" },
-                           "solubility": { "S0": 50, "dH": 1e4 } },
+                           "solubility": { "S0": 0.5, "dH": -1e4 } },
                 "die":   { "diffusivity": { "D0": 1e-7, "Q": 2e4 },
                            "solubility": { "S0": 2, "dH": -5e3 } } },
               "initial": { "mould": 1.0, "die": 0.1 },
