@@ -11,28 +11,35 @@ import dev.soakfield.fem.time.RunTotals;
 import dev.soakfield.fem.time.ThetaStepper;
 import dev.soakfield.fem.time.TimeSettings;
 import dev.soakfield.fem.time.TransientRun;
+import dev.soakfield.mesh.AtomicFiles;
 import dev.soakfield.mesh.MeshFinding;
 import dev.soakfield.mesh.MeshImport;
 import dev.soakfield.mesh.MeshInputException;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.gen.MidEdgeNodes;
 import dev.soakfield.mesh.load.MeshLoader;
+import dev.soakfield.mesh.msh.MshWriter;
 import dev.soakfield.mesh.topo.AssemblyOptions;
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * {@code run}: case file in, results out — reads and checks the case and its mesh, builds the
- * model, steps through time, and writes series.csv, fields (VTU/PVD) and summary.json into a folder
- * that appears only when the run has finished.
+ * model, steps through time, and writes series.csv, fields (VTU/PVD), summary.json, run.log,
+ * mesh.msh and manifest.json into a {@link ResultFolder}.
  */
 public final class RunPipeline {
   /** Relative residual of each linear solve: tight, so the global balance closes to ~1e-10. */
   static final double SOLVER_TOLERANCE = 1e-11;
 
   static final int SOLVER_MAX_ITERATIONS = 5000;
+
+  /** The copy of the mesh the run used, so a result folder stands on its own. */
+  public static final String MESH_COPY = "mesh.msh";
 
   private RunPipeline() {}
 
@@ -71,28 +78,92 @@ public final class RunPipeline {
     return new Prepared(spec, mesh, warnings);
   }
 
-  /** Runs the case and writes its results into {@code outDir}. */
+  /** Runs the case and writes its results into {@code outDir}, with default options. */
   public static RunSummary run(Path caseFile, Path outDir, RunProgress progress)
+      throws IOException {
+    return run(caseFile, outDir, progress, RunOptions.defaults());
+  }
+
+  /**
+   * Runs the case and writes its results into {@code outDir}: the folder exists from the start with
+   * a manifest saying "running"; each file appears under its real name only when complete.
+   *
+   * @throws HeapTooSmallException when the memory estimate exceeds {@code options.maxHeap()}
+   * @throws ResultFolderException when the folder holds another case's results, foreign files, or
+   *     cannot be written
+   */
+  public static RunSummary run(Path caseFile, Path outDir, RunProgress progress, RunOptions options)
       throws IOException {
     Prepared prepared = prepare(caseFile);
     CaseSpec spec = prepared.spec();
     TetMesh mesh = prepared.mesh();
+    MemoryEstimate memory = MemoryEstimate.of(mesh, mesh.order());
+    memory.requireHeap(options.maxHeap());
     List<String> warnings = new ArrayList<>(prepared.warnings());
     DiffusionModel model = ModelBuilder.build(spec, mesh, warnings);
     boolean lumped = spec.time().capacity() == CapacityForm.LUMPED;
     ThetaStepper stepper = new ThetaStepper(model, lumped, SOLVER_TOLERANCE, SOLVER_MAX_ITERATIONS);
     TimeSettings settings = settings(spec);
 
-    ResultFolder folder = ResultFolder.open(outDir);
+    RunManifest starting = RunManifest.starting(caseFile, spec.mesh(), options.toolVersion());
+    ResultFolder folder = ResultFolder.open(outDir, starting, options.force());
+    RunLog log;
     try {
+      log = new RunLog(folder.work().resolve(RunLog.FILE));
+      AtomicFiles.write(folder.work().resolve(MESH_COPY), f -> MshWriter.write(f, mesh, true));
+    } catch (IOException e) {
+      folder.fail("could not write into the folder: " + e.getMessage(), false);
+      throw ResultFolder.unwritable(folder.target(), e);
+    }
+    try (log) {
+      log.line("soakfield " + options.toolVersion() + ": case " + starting.caseFile());
+      log.line(
+          String.format(
+              Locale.ROOT,
+              "mesh %s: %d nodes, %d tetrahedra of order %d; heap estimate %s of %s",
+              starting.meshFile(),
+              mesh.nodeCount(),
+              mesh.tetCount(),
+              mesh.order(),
+              MemoryEstimate.megabytes(memory.bytes()),
+              MemoryEstimate.megabytes(options.maxHeap())));
       RunRecorder recorder =
-          new RunRecorder(folder.work(), spec, model, stepper, progress, warnings);
-      RunTotals totals;
-      try (recorder) {
-        totals = TransientRun.run(stepper, model.initialPhi(), settings, recorder);
+          new RunRecorder(folder.work(), spec, model, stepper, RunProgress.SILENT, warnings);
+      for (String w : warnings) {
+        log.line("warning: " + w);
       }
-      recorder.finish(totals);
-      folder.commit();
+      ProgressRelay relay = new ProgressRelay(recorder, spec.time().end(), progress, log);
+      RunTotals totals;
+      try {
+        try (recorder) {
+          totals = TransientRun.run(stepper, model.initialPhi(), settings, relay);
+        }
+        recorder.finish(totals);
+      } catch (IOException | UncheckedIOException e) {
+        IOException cause = e instanceof UncheckedIOException u ? u.getCause() : (IOException) e;
+        log.line("failed: writing results: " + cause);
+        log.close();
+        folder.fail("writing the results failed: " + cause.getMessage(), false);
+        throw ResultFolder.unwritable(folder.target(), cause);
+      } catch (RuntimeException e) {
+        log.line("failed: " + e.getMessage());
+        log.close();
+        folder.fail(String.valueOf(e.getMessage()), true);
+        throw e;
+      }
+      log.line(
+          String.format(
+              Locale.ROOT,
+              "finished: %d steps (%d rejected), %d linear iterations, %.2f s in linear solves,"
+                  + " %.2f s in all; balance error %.3e relative",
+              totals.steps(),
+              totals.rejectedSteps(),
+              totals.linearIterations(),
+              relay.solveSeconds(),
+              log.elapsedSeconds(),
+              recorder.balanceRelative()));
+      log.close();
+      folder.finish();
       return new RunSummary(
           folder.target(),
           totals.steps(),
@@ -100,9 +171,6 @@ public final class RunPipeline {
           totals.linearIterations(),
           recorder.balanceRelative(),
           warnings);
-    } catch (IOException | RuntimeException e) {
-      folder.discard();
-      throw e;
     }
   }
 

@@ -18,4 +18,10 @@ public interface StepListener {
    * {@code initial.faceInflow()} holds the amounts that raising added.
    */
   default void started(StepOutcome initial) {}
+
+  /**
+   * Called when a tried step ending at {@code t} was rejected by the error estimate and will be
+   * retried shorter; progress displays count these.
+   */
+  default void rejected(double t, double triedDt) {}
 }
