@@ -1,6 +1,8 @@
 package dev.soakfield.cli;
 
 import dev.soakfield.fem.casefile.CaseInputException;
+import dev.soakfield.fem.run.HeapTooSmallException;
+import dev.soakfield.fem.run.ResultFolderException;
 import dev.soakfield.fem.solve.SolverStalledException;
 import dev.soakfield.fem.time.RunFailedException;
 import dev.soakfield.mesh.MeshInputException;
@@ -53,7 +55,9 @@ public final class ExitCodes {
   static int codeFor(Throwable ex) {
     if (ex instanceof MeshInputException
         || ex instanceof UserInputException
-        || ex instanceof CaseInputException) {
+        || ex instanceof CaseInputException
+        || ex instanceof ResultFolderException
+        || ex instanceof HeapTooSmallException) {
       return BAD_INPUT;
     }
     if (ex instanceof RunFailedException || ex instanceof SolverStalledException) {

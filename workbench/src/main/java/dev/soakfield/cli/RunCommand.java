@@ -1,7 +1,9 @@
 package dev.soakfield.cli;
 
+import dev.soakfield.fem.run.RunOptions;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunSummary;
+import dev.soakfield.report.ReportWriter;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -18,8 +20,13 @@ import picocli.CommandLine.Spec;
     mixinStandardHelpOptions = true,
     description = {
       "Solves the case's transient diffusion and writes series.csv, fields.pvd with fields/*.vtu,"
-          + " and summary.json into the output folder.",
-      "The folder appears when the run has finished; an earlier run's folder is replaced only then."
+          + " summary.json, run.log, mesh.msh, case.json, report.html and report.md into the"
+          + " output folder.",
+      "manifest.json in the folder says whether the run is running, finished or failed; every"
+          + " file appears under its name only when complete. A folder holding another case's"
+          + " results, or other files, is not written without --force.",
+      "Progress: a bar on a terminal, a line every few seconds otherwise. Heap: set JAVA_OPTS,"
+          + " e.g. JAVA_OPTS=-Xmx8g."
     })
 final class RunCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
@@ -37,12 +44,22 @@ final class RunCommand implements Callable<Integer> {
   @Option(names = "--quiet", description = "Print nothing but errors.")
   boolean quiet;
 
+  @Option(
+      names = "--force",
+      description =
+          "Write into the folder even when it holds another case's results or files that are not"
+              + " Soakfield results (those other files are left as they are).")
+  boolean force;
+
   @Override
   public Integer call() throws Exception {
     PrintWriter err = spec.commandLine().getErr();
     ProgressLine progress = new ProgressLine(err, quiet);
-    RunSummary s = RunPipeline.run(caseFile, out, progress);
+    RunOptions options =
+        RunOptions.defaults().withForce(force).withToolVersion(VersionProvider.version());
+    RunSummary s = RunPipeline.run(caseFile, out, progress, options);
     progress.done();
+    ReportWriter.write(s.outputFolder());
     if (!quiet) {
       report(spec.commandLine().getOut(), s);
     }
@@ -52,7 +69,7 @@ final class RunCommand implements Callable<Integer> {
   static void report(PrintWriter out, RunSummary s) {
     out.printf(
         Locale.ROOT,
-        "results in %s: %d steps (%d rejected), %d solver iterations, balance error %.2e%n",
+        "results in %s (report.html): %d steps (%d rejected), %d solver iterations, balance error %.2e%n",
         s.outputFolder(),
         s.steps(),
         s.rejectedSteps(),

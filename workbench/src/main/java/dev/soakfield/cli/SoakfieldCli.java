@@ -12,7 +12,10 @@ import picocli.CommandLine.Command;
     subcommands = {
       MeshCommand.class,
       InfoCommand.class,
+      CheckCommand.class,
       RunCommand.class,
+      ReportCommand.class,
+      ExportCommand.class,
       DemoCommand.class,
       VerifyCommand.class,
       BenchCommand.class,

@@ -13,7 +13,16 @@ import java.util.Set;
 /** Turns the tree of a case file into a {@link CaseSpec}, collecting every independent problem. */
 final class CaseBinder {
   private static final Set<String> TOP_KEYS =
-      Set.of("mesh", "elements", "materials", "faces", "initial", "time", "probes", "threshold");
+      Set.of(
+          "$schema", // the editor hook of docs/case.schema.json; read by editors, ignored here
+          "mesh",
+          "elements",
+          "materials",
+          "faces",
+          "initial",
+          "time",
+          "probes",
+          "threshold");
 
   private final CaseFields fields;
   private final Path caseFile;

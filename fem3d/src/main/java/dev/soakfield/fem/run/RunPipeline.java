@@ -22,7 +22,9 @@ import dev.soakfield.mesh.msh.MshWriter;
 import dev.soakfield.mesh.topo.AssemblyOptions;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -40,6 +42,9 @@ public final class RunPipeline {
 
   /** The copy of the mesh the run used, so a result folder stands on its own. */
   public static final String MESH_COPY = "mesh.msh";
+
+  /** The copy of the case file as it was run (its mesh key still names the original mesh). */
+  public static final String CASE_COPY = "case.json";
 
   private RunPipeline() {}
 
@@ -111,6 +116,9 @@ public final class RunPipeline {
     try {
       log = new RunLog(folder.work().resolve(RunLog.FILE));
       AtomicFiles.write(folder.work().resolve(MESH_COPY), f -> MshWriter.write(f, mesh, true));
+      AtomicFiles.write(
+          folder.work().resolve(CASE_COPY),
+          f -> Files.copy(caseFile, f, StandardCopyOption.REPLACE_EXISTING));
     } catch (IOException e) {
       folder.fail("could not write into the folder: " + e.getMessage(), false);
       throw ResultFolder.unwritable(folder.target(), e);
