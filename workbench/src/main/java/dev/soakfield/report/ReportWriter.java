@@ -46,9 +46,10 @@ public final class ReportWriter {
    * Writes the report into {@code folder} and lists its files in the manifest.
    *
    * @return the files written, relative to the folder
-   * @throws ResultFolderException when {@code folder} is not a result folder
+   * @throws ResultFolderException when {@code folder} is not a result folder or the report cannot
+   *     be written
    */
-  public static List<String> write(Path folder) throws IOException {
+  public static List<String> write(Path folder) {
     RunManifest manifest =
         RunManifest.readFrom(folder)
             .orElseThrow(
@@ -58,6 +59,21 @@ public final class ReportWriter {
                             + ": found no "
                             + RunManifest.FILE
                             + ", expected a result folder written by 'soakfield run'"));
+    try {
+      return write(folder, manifest);
+    } catch (IOException e) {
+      throw new ResultFolderException(
+          folder
+              + ": cannot write the report ("
+              + e.getClass().getSimpleName()
+              + ": "
+              + e.getMessage()
+              + "), expected a folder that can be written and a disk with room",
+          e);
+    }
+  }
+
+  private static List<String> write(Path folder, RunManifest manifest) throws IOException {
     ReportDocument doc = build(folder, manifest);
     List<String> written = new ArrayList<>();
     for (String png : doc.pictureFiles()) {

@@ -1,5 +1,6 @@
 package dev.soakfield.report;
 
+import dev.soakfield.fem.run.ResultFolderException;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -24,12 +25,12 @@ public final class SeriesCsv {
   /**
    * Reads {@code file}.
    *
-   * @throws IllegalArgumentException when a row's cells do not match the header (file and line)
+   * @throws ResultFolderException when a row's cells do not match the header (file and line)
    */
   public static SeriesCsv read(Path file) throws IOException {
     List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
     if (lines.isEmpty()) {
-      throw new IllegalArgumentException(file + ": found an empty file, expected a header line");
+      throw new ResultFolderException(file + ": found an empty file, expected a header line");
     }
     List<String> names = split(lines.get(0));
     List<double[]> rows = new ArrayList<>();
@@ -40,7 +41,7 @@ public final class SeriesCsv {
       }
       List<String> cells = split(line);
       if (cells.size() != names.size()) {
-        throw new IllegalArgumentException(
+        throw new ResultFolderException(
             file
                 + ", line "
                 + (i + 1)

@@ -45,7 +45,7 @@ class ResultCommandsTest {
     byte[] png = Base64.getDecoder().decode(html.substring(at, html.indexOf('"', at)));
     // PNG signature, from the PNG specification (ISO/IEC 15948, section 5.2)
     assertEquals(
-        List.of(0x89, 'P', 'N', 'G'),
+        List.of(0x89, 0x50, 0x4e, 0x47), // \x89 P N G
         List.of(png[0] & 0xff, (int) png[1], (int) png[2], (int) png[3]));
     for (String s :
         List.of(

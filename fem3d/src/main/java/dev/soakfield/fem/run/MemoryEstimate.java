@@ -7,13 +7,13 @@ import java.util.Locale;
  * How much Java heap a run will need, from the mesh alone, so a run that cannot fit is refused
  * before it starts instead of failing hours in.
  *
- * <p>Linear: about 900 bytes per tetrahedron, the peak heap measured end to end by {@code
- * soakfield bench run}. Quadratic: measured here as the smallest heap a whole run completes in, on
- * a 24³-cell box (82 944 tetrahedra, 10 fixed steps, results written): between 50 and 60 MB linear
- * and between 400 and 450 MB quadratic, a ratio of about 7.7 (eight times the nodes, four times the
- * non-zeros per row, 10-node element tables), hence about 5 200 bytes per quadratic tetrahedron. A
- * quarter on top covers the collector's headroom; the estimate errs on the generous side for
- * linear runs (about twice the smallest heap that works).
+ * <p>Linear: about 900 bytes per tetrahedron, the peak heap measured end to end by {@code soakfield
+ * bench run}. Quadratic: measured here as the smallest heap a whole run completes in, on a 24³-cell
+ * box (82 944 tetrahedra, 10 fixed steps, results written): between 50 and 60 MB linear and between
+ * 400 and 450 MB quadratic, a ratio of about 7.7 (eight times the nodes, four times the non-zeros
+ * per row, 10-node element tables), hence about 5 200 bytes per quadratic tetrahedron. A quarter on
+ * top covers the collector's headroom; the estimate errs on the generous side for linear runs
+ * (about twice the smallest heap that works).
  */
 public record MemoryEstimate(long tets, int order, long bytes) {
   /** Measured peak heap per linear tetrahedron, end to end (bytes). */

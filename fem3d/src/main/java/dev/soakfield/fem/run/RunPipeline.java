@@ -135,14 +135,16 @@ public final class RunPipeline {
               mesh.order(),
               MemoryEstimate.megabytes(memory.bytes()),
               MemoryEstimate.megabytes(options.maxHeap())));
-      RunRecorder recorder =
-          new RunRecorder(folder.work(), spec, model, stepper, RunProgress.SILENT, warnings);
-      for (String w : warnings) {
-        log.line("warning: " + w);
-      }
-      ProgressRelay relay = new ProgressRelay(recorder, spec.time().end(), progress, log);
+      RunRecorder recorder;
+      ProgressRelay relay;
       RunTotals totals;
       try {
+        recorder =
+            new RunRecorder(folder.work(), spec, model, stepper, RunProgress.SILENT, warnings);
+        for (String w : warnings) {
+          log.line("warning: " + w);
+        }
+        relay = new ProgressRelay(recorder, spec.time().end(), progress, log);
         try (recorder) {
           totals = TransientRun.run(stepper, model.initialPhi(), settings, relay);
         }
