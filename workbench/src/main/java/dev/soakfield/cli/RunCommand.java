@@ -3,6 +3,8 @@ package dev.soakfield.cli;
 import dev.soakfield.fem.run.RunOptions;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunSummary;
+import dev.soakfield.fem.solve.SolverStalledException;
+import dev.soakfield.fem.time.RunFailedException;
 import dev.soakfield.report.ReportWriter;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -57,7 +59,15 @@ final class RunCommand implements Callable<Integer> {
     ProgressLine progress = new ProgressLine(err, quiet);
     RunOptions options =
         RunOptions.defaults().withForce(force).withToolVersion(VersionProvider.version());
-    RunSummary s = RunPipeline.run(caseFile, out, progress, options);
+    RunSummary s;
+    try {
+      s = RunPipeline.run(caseFile, out, progress, options);
+    } catch (RunFailedException | SolverStalledException e) {
+      // the folder says "failed" and holds what was complete: a report of that part helps
+      progress.done();
+      ReportWriter.write(out);
+      throw e;
+    }
     progress.done();
     ReportWriter.write(s.outputFolder());
     if (!quiet) {
