@@ -2,6 +2,7 @@ package dev.soakfield.cli;
 
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunSummary;
+import dev.soakfield.report.ReportWriter;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.PrintWriter;
@@ -57,6 +58,7 @@ final class DemoCommand implements Callable<Integer> {
     ProgressLine progress = new ProgressLine(spec.commandLine().getErr(), false);
     RunSummary s = RunPipeline.run(caseDir.resolve(FILES[1]), out.resolve("results"), progress);
     progress.done();
+    ReportWriter.write(s.outputFolder());
     RunCommand.report(o, s);
     o.println("open " + s.outputFolder().resolve("fields.pvd") + " in a VTK viewer, or read");
     o.println("  " + s.outputFolder().resolve("series.csv") + " and summary.json beside it");

@@ -3,6 +3,8 @@ package dev.soakfield.cli;
 import dev.soakfield.fem.casefile.CaseInputException;
 import dev.soakfield.fem.laws.PluginLoadException;
 import dev.soakfield.fem.laws.SourceLawException;
+import dev.soakfield.fem.run.HeapTooSmallException;
+import dev.soakfield.fem.run.ResultFolderException;
 import dev.soakfield.fem.solve.SolverStalledException;
 import dev.soakfield.fem.time.RunFailedException;
 import dev.soakfield.mesh.MeshInputException;
@@ -56,7 +58,9 @@ public final class ExitCodes {
     if (ex instanceof MeshInputException
         || ex instanceof UserInputException
         || ex instanceof CaseInputException
-        || ex instanceof PluginLoadException) {
+        || ex instanceof PluginLoadException
+        || ex instanceof ResultFolderException
+        || ex instanceof HeapTooSmallException) {
       return BAD_INPUT;
     }
     if (ex instanceof RunFailedException

@@ -2,8 +2,12 @@ package dev.soakfield.cli;
 
 import dev.soakfield.fem.laws.PluginFolders;
 import dev.soakfield.fem.laws.SourceLawCatalog;
+import dev.soakfield.fem.run.RunOptions;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunSummary;
+import dev.soakfield.fem.solve.SolverStalledException;
+import dev.soakfield.fem.time.RunFailedException;
+import dev.soakfield.report.ReportWriter;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -22,8 +26,13 @@ import picocli.CommandLine.Spec;
     mixinStandardHelpOptions = true,
     description = {
       "Solves the case's transient diffusion and writes series.csv, fields.pvd with fields/*.vtu,"
-          + " and summary.json into the output folder.",
-      "The folder appears when the run has finished; an earlier run's folder is replaced only then."
+          + " summary.json, run.log, mesh.msh, case.json, report.html and report.md into the"
+          + " output folder.",
+      "manifest.json in the folder says whether the run is running, finished or failed; every"
+          + " file appears under its name only when complete. A folder holding another case's"
+          + " results, or other files, is not written without --force.",
+      "Progress: a bar on a terminal, a line every few seconds otherwise. Heap: set JAVA_OPTS,"
+          + " e.g. JAVA_OPTS=-Xmx8g."
     })
 final class RunCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
@@ -52,13 +61,68 @@ final class RunCommand implements Callable<Integer> {
   /** The laws this run may use; loaded before the run so that a broken plugin stops it early. */
   SourceLawCatalog laws;
 
+  @Option(
+      names = "--force",
+      description =
+          "Write into the folder even when it holds another case's results or files that are not"
+              + " Soakfield results (those other files are left as they are).")
+  boolean force;
+
+  @Option(
+      names = "--resume",
+      description =
+          "Go on from the last checkpoint of an interrupted run of the same case in the output"
+              + " folder (after a crash, kill or power cut); the results equal an uninterrupted"
+              + " run's.")
+  boolean resume;
+
+  @Option(
+      names = "--checkpoint-steps",
+      defaultValue = "500",
+      paramLabel = "N",
+      description =
+          "Save a checkpoint every N accepted steps (default ${DEFAULT-VALUE}; 0: never).")
+  int checkpointSteps;
+
+  @Option(
+      names = "--checkpoint-every",
+      defaultValue = "60 s",
+      paramLabel = "TIME",
+      description = "Save a checkpoint when this much wall time passed (default ${DEFAULT-VALUE}).")
+  String checkpointEvery;
+
   @Override
   public Integer call() throws Exception {
+    if (checkpointSteps < 0) {
+      throw new UserInputException(
+          "--checkpoint-steps: found " + checkpointSteps + ", expected 0 or more");
+    }
+    double checkpointSeconds = OptionValues.si(checkpointEvery, "s", "--checkpoint-every");
+    if (checkpointSeconds < 0) {
+      throw new UserInputException(
+          "--checkpoint-every: found " + checkpointEvery + ", expected 0 or more");
+    }
     PrintWriter err = spec.commandLine().getErr();
     laws = SourceLawCatalog.load(PluginFolders.withDefault(plugins));
     ProgressLine progress = new ProgressLine(err, quiet);
-    RunSummary s = RunPipeline.run(caseFile, out, progress, laws.resolver());
+    RunOptions options =
+        RunOptions.defaults()
+            .withForce(force)
+            .withToolVersion(VersionProvider.version())
+            .withLaws(laws.resolver())
+            .withCheckpoints(checkpointSteps, checkpointSeconds)
+            .withResume(resume);
+    RunSummary s;
+    try {
+      s = RunPipeline.run(caseFile, out, progress, options);
+    } catch (RunFailedException | SolverStalledException e) {
+      // the folder says "failed" and holds what was complete: a report of that part helps
+      progress.done();
+      ReportWriter.write(out);
+      throw e;
+    }
     progress.done();
+    ReportWriter.write(s.outputFolder());
     if (!quiet) {
       report(spec.commandLine().getOut(), s);
     }
@@ -68,7 +132,7 @@ final class RunCommand implements Callable<Integer> {
   static void report(PrintWriter out, RunSummary s) {
     out.printf(
         Locale.ROOT,
-        "results in %s: %d steps (%d rejected), %d solver iterations, balance error %.2e%n",
+        "results in %s (report.html): %d steps (%d rejected), %d solver iterations, balance error %.2e%n",
         s.outputFolder(),
         s.steps(),
         s.rejectedSteps(),

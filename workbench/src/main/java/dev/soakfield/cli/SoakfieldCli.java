@@ -12,8 +12,11 @@ import picocli.CommandLine.Command;
     subcommands = {
       MeshCommand.class,
       InfoCommand.class,
+      CheckCommand.class,
       RunCommand.class,
       BakeCommand.class,
+      ReportCommand.class,
+      ExportCommand.class,
       DemoCommand.class,
       VerifyCommand.class,
       FitCommand.class,

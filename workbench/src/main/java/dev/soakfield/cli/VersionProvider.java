@@ -6,7 +6,12 @@ import picocli.CommandLine;
 final class VersionProvider implements CommandLine.IVersionProvider {
   @Override
   public String[] getVersion() {
+    return new String[] {"soakfield " + version()};
+  }
+
+  /** The version from the jar manifest, or "development build". */
+  static String version() {
     String v = SoakfieldCli.class.getPackage().getImplementationVersion();
-    return new String[] {"soakfield " + (v == null ? "development build" : v)};
+    return v == null ? "development build" : v;
   }
 }

@@ -16,7 +16,7 @@ import java.util.Set;
 final class CaseBinder {
   private static final Set<String> TOP_KEYS =
       Set.of(
-          "$schema",
+          "$schema", // the editor hook of docs/case.schema.json; read by editors, ignored here
           "mesh",
           "elements",
           "law",

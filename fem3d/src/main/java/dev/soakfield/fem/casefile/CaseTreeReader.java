@@ -27,6 +27,14 @@ final class CaseTreeReader {
 
   private CaseTreeReader() {}
 
+  /** The parser's message without its internal source description, which means nothing to users. */
+  static String withoutParserSource(JsonProcessingException e) {
+    return e.getOriginalMessage()
+        .replaceAll(
+            "\\(start marker at \\[Source: [^;\\]]*(\\([^)]*\\))?; line: (\\d+), column: (\\d+)\\]\\)",
+            "(opened on line $2, column $3)");
+  }
+
   static CaseNode read(Path file, String source) {
     try (InputStream in = Files.newInputStream(file);
         JsonParser parser = FACTORY.createParser(in)) {
@@ -35,7 +43,7 @@ final class CaseTreeReader {
       JsonLocation at = e.getLocation();
       int line = at == null ? 0 : at.getLineNr();
       int column = at == null ? 0 : at.getColumnNr();
-      throw single(source, line, column, "malformed JSON: " + e.getOriginalMessage());
+      throw single(source, line, column, "malformed JSON: " + withoutParserSource(e));
     } catch (NoSuchFileException e) {
       throw single(source, 0, 0, "found no such file, expected a readable case file");
     } catch (IOException e) {

@@ -86,7 +86,10 @@ public final class BakeSearch {
     StopSpec stop = new StopSpec(target.target(), target.name(), true, target.level());
     Path first = work.resolve("bake-bracket");
     RunPipeline.run(
-        withBake(base, oven, oven.longest(), Optional.of(stop)), first, RunProgress.SILENT, laws);
+        withBake(base, oven, oven.longest(), Optional.of(stop)),
+        first,
+        RunProgress.SILENT,
+        RunOptions.defaults().withLaws(laws));
     SeriesColumn curve = SeriesColumn.read(first.resolve("series.csv"), column(target));
     int runs = 1;
     int hit = -1;
@@ -109,7 +112,11 @@ public final class BakeSearch {
     while (hi - lo > relativeTolerance * hi && runs < 40) {
       double mid = 0.5 * (lo + hi);
       Path trial = work.resolve("bake-trial");
-      RunPipeline.run(withBake(base, oven, mid, Optional.empty()), trial, RunProgress.SILENT, laws);
+      RunPipeline.run(
+          withBake(base, oven, mid, Optional.empty()),
+          trial,
+          RunProgress.SILENT,
+          RunOptions.defaults().withLaws(laws));
       SeriesColumn end = SeriesColumn.read(trial.resolve("series.csv"), column(target));
       runs++;
       deleteTree(trial);

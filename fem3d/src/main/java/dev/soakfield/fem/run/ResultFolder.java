@@ -5,32 +5,171 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
 import java.util.stream.Stream;
 
 /**
- * The output folder of a run, filled in a hidden sibling folder and moved into place only when the
- * run has finished: a failed or interrupted run never leaves results that look complete, and the
- * results of an earlier run stay until the new ones are whole.
+ * The output folder of a run. It exists from the start with a manifest saying "running"; files are
+ * written into a hidden staging folder inside it and renamed into place one by one when the run
+ * ends, so every file under its real name is complete. A finished run's manifest says "finished"; a
+ * failed run's says "failed" with the reason and keeps the files that were complete. A folder
+ * holding another case's results, or files that are not Soakfield results, is not touched without
+ * {@code force}.
  */
 public final class ResultFolder {
+  /** The staging folder inside the result folder; never holds finished results. */
+  public static final String STAGING = ".running";
+
   private final Path target;
   private final Path work;
+  private final List<String> earlierFiles;
+  private RunManifest manifest;
 
-  private ResultFolder(Path target, Path work) {
+  private ResultFolder(Path target, RunManifest manifest, List<String> earlierFiles) {
     this.target = target;
-    this.work = work;
+    this.work = target.resolve(STAGING);
+    this.manifest = manifest;
+    this.earlierFiles = earlierFiles;
   }
 
-  public static ResultFolder open(Path target) throws IOException {
+  /**
+   * Opens {@code target} for a run described by {@code starting}: checks that the folder may take
+   * it, creates it and the staging folder, and writes the manifest with status running.
+   *
+   * @throws ResultFolderException when the folder holds another case's results or foreign files
+   *     (and {@code force} is false), or cannot be written
+   */
+  public static ResultFolder open(Path target, RunManifest starting, boolean force) {
     Path abs = target.toAbsolutePath().normalize();
-    Path parent = abs.getParent();
-    Files.createDirectories(parent);
-    Path work = Files.createTempDirectory(parent, "." + abs.getFileName() + ".running-");
-    return new ResultFolder(abs, work);
+    Optional<RunManifest> earlier = Optional.empty();
+    if (Files.isDirectory(abs)) {
+      try {
+        earlier = RunManifest.readFrom(abs);
+      } catch (ResultFolderException e) {
+        if (!force) {
+          throw new ResultFolderException(e.getMessage() + "; use --force to replace it", e);
+        }
+      }
+      if (!force) {
+        refuseForeign(abs, starting, earlier);
+      }
+    } else if (Files.exists(abs)) {
+      throw new ResultFolderException(
+          abs
+              + ": found a file, expected a folder for the results (or a path that does not exist)");
+    }
+    ResultFolder folder =
+        new ResultFolder(abs, starting, earlier.map(RunManifest::files).orElse(List.of()));
+    try {
+      Files.createDirectories(abs);
+      deleteTree(folder.work);
+      Files.createDirectories(folder.work);
+      starting.writeTo(abs);
+    } catch (IOException e) {
+      throw unwritable(abs, e);
+    }
+    return folder;
   }
 
-  /** Where files are written while the run goes on. */
+  /**
+   * Reopens the folder of an interrupted run of the same case to go on from its checkpoint: the
+   * staged files stay, the manifest says running again.
+   *
+   * @throws ResultFolderException when the folder holds no interrupted run of this case (no
+   *     manifest, another case or mesh, a finished or failed run, or no checkpoint yet)
+   */
+  public static ResultFolder reopen(Path target, RunManifest starting, String checkpointName) {
+    Path abs = target.toAbsolutePath().normalize();
+    RunManifest earlier =
+        RunManifest.readFrom(abs)
+            .orElseThrow(
+                () ->
+                    new ResultFolderException(
+                        abs + ": found no run to resume (no " + RunManifest.FILE + ")"));
+    if (!earlier.caseSha256().equals(starting.caseSha256())
+        || !earlier.meshSha256().equals(starting.meshSha256())) {
+      throw new ResultFolderException(
+          abs
+              + ": found the run of another case or mesh ("
+              + earlier.caseFile()
+              + "), expected an interrupted run of "
+              + starting.caseFile()
+              + "; run without --resume to start afresh");
+    }
+    if (earlier.status() != RunManifest.Status.RUNNING) {
+      throw new ResultFolderException(
+          abs
+              + ": found a run that "
+              + earlier.status().word()
+              + ", expected an interrupted one; nothing to resume, run again without --resume");
+    }
+    if (!Files.isDirectory(abs.resolve(STAGING))
+        || !Files.isRegularFile(abs.resolve(checkpointName))) {
+      throw new ResultFolderException(
+          abs
+              + ": found no checkpoint, expected "
+              + checkpointName
+              + " (the run stopped before its first one); run again without --resume");
+    }
+    ResultFolder folder = new ResultFolder(abs, starting, earlier.files());
+    try {
+      starting.writeTo(abs);
+    } catch (IOException e) {
+      throw unwritable(abs, e);
+    }
+    return folder;
+  }
+
+  private static void refuseForeign(Path abs, RunManifest starting, Optional<RunManifest> earlier) {
+    if (earlier.isPresent()) {
+      RunManifest m = earlier.get();
+      if (!m.caseSha256().equals(starting.caseSha256())) {
+        throw new ResultFolderException(
+            abs
+                + ": found the results of another case ("
+                + m.caseFile()
+                + ", SHA-256 "
+                + m.caseSha256().substring(0, 12)
+                + "…, "
+                + m.status().word()
+                + "), expected results of "
+                + starting.caseFile()
+                + " or an empty folder; use --force to replace them, or choose another --out");
+      }
+      return;
+    }
+    try (Stream<Path> s = Files.list(abs)) {
+      if (s.findAny().isPresent()) {
+        throw new ResultFolderException(
+            abs
+                + ": found a folder that is not empty and holds no "
+                + RunManifest.FILE
+                + ", expected a Soakfield result folder or an empty folder; use --force to write"
+                + " into it anyway, or choose another --out");
+      }
+    } catch (IOException e) {
+      throw unwritable(abs, e);
+    }
+  }
+
+  static ResultFolderException unwritable(Path folder, IOException e) {
+    String reason = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+    return new ResultFolderException(
+        folder
+            + ": cannot write the results ("
+            + e.getClass().getSimpleName()
+            + ": "
+            + reason
+            + "), expected a folder that can be written and a disk with room",
+        e);
+  }
+
+  /** Where files are written while the run goes on (a hidden folder inside {@link #target}). */
   public Path work() {
     return work;
   }
@@ -40,38 +179,98 @@ public final class ResultFolder {
     return target;
   }
 
-  /** Moves the finished results into place, replacing an earlier run's folder. */
-  public void commit() throws IOException {
-    if (work.getFileSystem().supportedFileAttributeViews().contains("posix")) {
-      // a temporary folder is private to its owner; results are for everyone who may read here
-      Files.setPosixFilePermissions(
-          work, java.nio.file.attribute.PosixFilePermissions.fromString("rwxr-xr-x"));
-    }
-    Path old = null;
-    if (Files.exists(target)) {
-      old = target.resolveSibling("." + target.getFileName() + ".old-" + System.nanoTime());
-      move(target, old);
-    }
-    move(work, target);
-    if (old != null) {
-      deleteTree(old);
+  /** The manifest as last written. */
+  public RunManifest manifest() {
+    return manifest;
+  }
+
+  /** Moves every staged file into place and marks the run finished. */
+  public void finish() {
+    try {
+      List<String> files = moveStaged();
+      dropEarlier(files);
+      manifest = manifest.ended(RunManifest.Status.FINISHED, Optional.empty(), files);
+      manifest.writeTo(target);
+    } catch (IOException e) {
+      markFailed("writing the results failed: " + e.getMessage(), false);
+      throw unwritable(target, e);
     }
   }
 
-  /** Removes the unfinished results. */
-  public void discard() {
+  /**
+   * Marks the run failed with {@code message}. With {@code keepStaged} the staged files are
+   * complete (the run stopped between writes) and move into place; without it (a write failed, so
+   * one file may be cut short) they are dropped.
+   */
+  public void fail(String message, boolean keepStaged) {
+    markFailed(message, keepStaged);
+  }
+
+  private void markFailed(String message, boolean keepStaged) {
     try {
-      deleteTree(work);
+      List<String> files = List.of();
+      if (keepStaged) {
+        files = moveStaged();
+        dropEarlier(files);
+      } else {
+        deleteTree(work);
+        files = stillThere(earlierFiles);
+      }
+      manifest = manifest.ended(RunManifest.Status.FAILED, Optional.of(message), files);
+      manifest.writeTo(target);
     } catch (IOException e) {
-      // best effort: a hidden folder left behind does not harm anyone
+      // the manifest keeps saying "running" (never "finished"); the caller reports the first error
+    }
+  }
+
+  private List<String> stillThere(List<String> names) {
+    List<String> out = new ArrayList<>();
+    for (String n : names) {
+      if (Files.isRegularFile(target.resolve(n))) {
+        out.add(n);
+      }
+    }
+    return out;
+  }
+
+  private List<String> moveStaged() throws IOException {
+    List<String> names = new ArrayList<>();
+    if (!Files.isDirectory(work)) {
+      return names;
+    }
+    List<Path> staged;
+    try (Stream<Path> s = Files.walk(work)) {
+      staged = s.filter(Files::isRegularFile).sorted().toList();
+    }
+    for (Path p : staged) {
+      String name = work.relativize(p).toString().replace('\\', '/');
+      if (name.endsWith(".part")) {
+        continue; // an atomic write cut short: not a result
+      }
+      Path to = target.resolve(name);
+      Files.createDirectories(to.getParent());
+      move(p, to);
+      names.add(name);
+    }
+    deleteTree(work);
+    return names;
+  }
+
+  /** Removes the earlier run's files this run did not replace (stale frames, old logs). */
+  private void dropEarlier(List<String> kept) throws IOException {
+    Set<String> keep = new HashSet<>(kept);
+    for (String name : earlierFiles) {
+      if (!keep.contains(name) && !name.contains("..")) {
+        Files.deleteIfExists(target.resolve(name));
+      }
     }
   }
 
   private static void move(Path from, Path to) throws IOException {
     try {
-      Files.move(from, to, StandardCopyOption.ATOMIC_MOVE);
+      Files.move(from, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
     } catch (AtomicMoveNotSupportedException e) {
-      Files.move(from, to);
+      Files.move(from, to, StandardCopyOption.REPLACE_EXISTING);
     }
   }
 

@@ -7,32 +7,45 @@ import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.casefile.StepControl;
 import dev.soakfield.fem.casefile.TimeScheme;
 import dev.soakfield.fem.physics.DiffusionModel;
+import dev.soakfield.fem.time.RunCursor;
 import dev.soakfield.fem.time.RunTotals;
 import dev.soakfield.fem.time.ThetaStepper;
 import dev.soakfield.fem.time.TimeSettings;
 import dev.soakfield.fem.time.TransientRun;
+import dev.soakfield.mesh.AtomicFiles;
 import dev.soakfield.mesh.MeshFinding;
 import dev.soakfield.mesh.MeshImport;
 import dev.soakfield.mesh.MeshInputException;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.gen.MidEdgeNodes;
 import dev.soakfield.mesh.load.MeshLoader;
+import dev.soakfield.mesh.msh.MshWriter;
 import dev.soakfield.mesh.topo.AssemblyOptions;
 import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * {@code run}: case file in, results out — reads and checks the case and its mesh, builds the
- * model, steps through time, and writes series.csv, fields (VTU/PVD) and summary.json into a folder
- * that appears only when the run has finished.
+ * model, steps through time, and writes series.csv, fields (VTU/PVD), summary.json, run.log,
+ * mesh.msh and manifest.json into a {@link ResultFolder}.
  */
 public final class RunPipeline {
   /** Relative residual of each linear solve: tight, so the global balance closes to ~1e-10. */
   static final double SOLVER_TOLERANCE = 1e-11;
 
   static final int SOLVER_MAX_ITERATIONS = 5000;
+
+  /** The copy of the mesh the run used, so a result folder stands on its own. */
+  public static final String MESH_COPY = "mesh.msh";
+
+  /** The copy of the case file as it was run (its mesh key still names the original mesh). */
+  public static final String CASE_COPY = "case.json";
 
   private RunPipeline() {}
 
@@ -71,23 +84,40 @@ public final class RunPipeline {
     return new Prepared(spec, mesh, warnings);
   }
 
-  /** Runs the case (without source-law plugins) and writes its results into {@code outDir}. */
+  /** Runs the case and writes its results into {@code outDir}, with default options. */
   public static RunSummary run(Path caseFile, Path outDir, RunProgress progress)
       throws IOException {
-    return run(caseFile, outDir, progress, LawResolver.none());
+    return run(caseFile, outDir, progress, RunOptions.defaults());
   }
 
-  /** Runs the case and writes its results into {@code outDir}; {@code laws} resolves its laws. */
+  /** Runs the case with default options and {@code laws} to resolve its source laws. */
   public static RunSummary run(Path caseFile, Path outDir, RunProgress progress, LawResolver laws)
       throws IOException {
-    return run(prepare(caseFile), outDir, progress, laws);
+    return run(caseFile, outDir, progress, RunOptions.defaults().withLaws(laws));
+  }
+
+  /**
+   * Runs the case and writes its results into {@code outDir}: the folder exists from the start with
+   * a manifest saying "running"; each file appears under its real name only when complete.
+   *
+   * @throws HeapTooSmallException when the memory estimate exceeds {@code options.maxHeap()}
+   * @throws ResultFolderException when the folder holds another case's results, foreign files, or
+   *     cannot be written
+   */
+  public static RunSummary run(Path caseFile, Path outDir, RunProgress progress, RunOptions options)
+      throws IOException {
+    return run(prepare(caseFile), outDir, progress, options);
   }
 
   /** Runs a case already read and checked (see {@link #prepare}). */
   public static RunSummary run(
-      Prepared prepared, Path outDir, RunProgress progress, LawResolver laws) throws IOException {
+      Prepared prepared, Path outDir, RunProgress progress, RunOptions options) throws IOException {
+    Path caseFile = prepared.spec().caseFile();
+    LawResolver laws = options.laws();
     CaseSpec spec = prepared.spec();
     TetMesh mesh = prepared.mesh();
+    MemoryEstimate memory = MemoryEstimate.of(mesh, mesh.order());
+    memory.requireHeap(options.maxHeap());
     List<String> warnings = new ArrayList<>(prepared.warnings());
     DiffusionModel model = ModelBuilder.build(spec, mesh, warnings, laws);
     boolean lumped = spec.time().capacity() == CapacityForm.LUMPED;
@@ -95,16 +125,94 @@ public final class RunPipeline {
     continueLawStates(spec, mesh, stepper, warnings);
     TimeSettings settings = settings(spec);
 
-    ResultFolder folder = ResultFolder.open(outDir);
+    RunManifest starting = RunManifest.starting(caseFile, spec.mesh(), options.toolVersion());
+    ResultFolder folder =
+        options.resume()
+            ? ResultFolder.reopen(outDir, starting, Checkpointer.NAME)
+            : ResultFolder.open(outDir, starting, options.force());
+    Path checkpoint = folder.target().resolve(Checkpointer.NAME);
+    String fingerprint = starting.caseSha256() + "/" + starting.meshSha256();
+    StateBundle resumeFrom = options.resume() ? readCheckpoint(checkpoint, fingerprint) : null;
+    RunLog log;
     try {
-      RunRecorder recorder =
-          new RunRecorder(folder.work(), spec, model, stepper, progress, warnings);
+      log = new RunLog(folder.work().resolve(RunLog.FILE));
+      AtomicFiles.write(folder.work().resolve(MESH_COPY), f -> MshWriter.write(f, mesh, true));
+      AtomicFiles.write(
+          folder.work().resolve(CASE_COPY),
+          f -> Files.copy(caseFile, f, StandardCopyOption.REPLACE_EXISTING));
+    } catch (IOException e) {
+      folder.fail("could not write into the folder: " + e.getMessage(), false);
+      throw ResultFolder.unwritable(folder.target(), e);
+    }
+    try (log) {
+      log.line("soakfield " + options.toolVersion() + ": case " + starting.caseFile());
+      log.line(
+          String.format(
+              Locale.ROOT,
+              "mesh %s: %d nodes, %d tetrahedra of order %d; heap estimate %s of %s",
+              starting.meshFile(),
+              mesh.nodeCount(),
+              mesh.tetCount(),
+              mesh.order(),
+              MemoryEstimate.megabytes(memory.bytes()),
+              MemoryEstimate.megabytes(options.maxHeap())));
+      RunRecorder recorder;
+      ProgressRelay relay;
       RunTotals totals;
-      try (recorder) {
-        totals = TransientRun.run(stepper, model.initialPhi(), settings, recorder);
+      try {
+        recorder =
+            new RunRecorder(
+                folder.work(), spec, model, stepper, RunProgress.SILENT, warnings, resumeFrom);
+        RunCursor cursor = null;
+        if (resumeFrom != null) {
+          stepper.restoreLawStates(Checkpointer.lawStates(resumeFrom));
+          cursor = Checkpointer.cursor(resumeFrom);
+          log.line(
+              String.format(Locale.ROOT, "resumed from the checkpoint at t = %.6g s", cursor.t()));
+        }
+        Checkpointer checkpoints =
+            new Checkpointer(
+                folder.target(),
+                recorder,
+                stepper,
+                options.checkpointSteps(),
+                options.checkpointSeconds(),
+                fingerprint);
+        for (String w : warnings) {
+          log.line("warning: " + w);
+        }
+        relay = new ProgressRelay(recorder, spec.time().end(), progress, log);
+        try (recorder) {
+          totals =
+              TransientRun.run(stepper, model.initialPhi(), settings, relay, checkpoints, cursor);
+        }
+        recorder.finish(totals);
+      } catch (IOException | UncheckedIOException e) {
+        IOException cause = e instanceof UncheckedIOException u ? u.getCause() : (IOException) e;
+        log.line("failed: writing results: " + cause);
+        log.close();
+        folder.fail("writing the results failed: " + cause.getMessage(), false);
+        throw ResultFolder.unwritable(folder.target(), cause);
+      } catch (RuntimeException e) {
+        log.line("failed: " + e.getMessage());
+        log.close();
+        folder.fail(String.valueOf(e.getMessage()), true);
+        throw e;
       }
-      recorder.finish(totals);
-      folder.commit();
+      log.line(
+          String.format(
+              Locale.ROOT,
+              "finished: %d steps (%d rejected), %d linear iterations, %.2f s in linear solves,"
+                  + " %.2f s in all; balance error %.3e relative",
+              totals.steps(),
+              totals.rejectedSteps(),
+              totals.linearIterations(),
+              relay.solveSeconds(),
+              log.elapsedSeconds(),
+              recorder.balanceRelative()));
+      log.close();
+      folder.finish();
+      Files.deleteIfExists(checkpoint); // the results are complete: nothing left to resume
       return new RunSummary(
           folder.target(),
           totals.steps(),
@@ -112,10 +220,16 @@ public final class RunPipeline {
           totals.linearIterations(),
           recorder.balanceRelative(),
           warnings);
-    } catch (IOException | RuntimeException e) {
-      folder.discard();
-      throw e;
     }
+  }
+
+  private static StateBundle readCheckpoint(Path file, String fingerprint) throws IOException {
+    StateBundle b = StateBundle.read(file);
+    if (!b.text("fingerprint").equals(fingerprint)) {
+      throw new ResultFolderException(
+          file + ": found the checkpoint of another case or mesh, expected one of this run");
+    }
+    return b;
   }
 
   /** A run that starts from an earlier one carries its source-law states over when they fit. */

@@ -23,4 +23,10 @@ public interface StepListener {
   default boolean stopRequested() {
     return false;
   }
+
+  /**
+   * Called when a tried step ending at {@code t} was rejected by the error estimate and will be
+   * retried shorter; progress displays count these.
+   */
+  default void rejected(double t, double triedDt) {}
 }

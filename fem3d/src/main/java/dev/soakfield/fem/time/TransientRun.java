@@ -140,6 +140,7 @@ public final class TransientRun {
         error = localError(previous, previousDt, phi, next, tryDt) / Math.max(scale, 1e-300);
         if (error > s.tolerance() && tryDt > minStep) {
           rejected++;
+          listener.rejected(t + tryDt, tryDt);
           dt =
               ladder(
                   ladderBase,

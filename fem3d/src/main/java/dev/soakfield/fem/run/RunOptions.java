@@ -1,0 +1,85 @@
+package dev.soakfield.fem.run;
+
+import java.util.Objects;
+
+/**
+ * How a run treats its output folder and heap.
+ *
+ * @param force replace another case's results, or write into a folder that is not a Soakfield
+ *     result folder
+ * @param toolVersion the version written into the manifest
+ * @param maxHeap the heap the memory estimate is held against ({@code Runtime.maxMemory()})
+ * @param laws resolves the case's source laws (the plugin catalog)
+ * @param checkpointSteps save a checkpoint every so many accepted steps (0: not by steps)
+ * @param checkpointSeconds save a checkpoint when this much wall time passed (0: not by time)
+ * @param resume go on from the checkpoint of an interrupted run in the output folder
+ */
+public record RunOptions(
+    boolean force,
+    String toolVersion,
+    long maxHeap,
+    LawResolver laws,
+    int checkpointSteps,
+    double checkpointSeconds,
+    boolean resume) {
+  /** Checkpoints by default: every 500 steps or 60 s of wall time, whichever comes first. */
+  public static final int DEFAULT_CHECKPOINT_STEPS = 500;
+
+  public static final double DEFAULT_CHECKPOINT_SECONDS = 60;
+
+  public RunOptions {
+    Objects.requireNonNull(toolVersion, "toolVersion");
+    Objects.requireNonNull(laws, "laws");
+    if (checkpointSteps < 0 || !(checkpointSeconds >= 0)) {
+      throw new IllegalArgumentException("checkpoint intervals must not be negative");
+    }
+  }
+
+  /** These options with {@code laws}. */
+  public RunOptions withLaws(LawResolver laws) {
+    return new RunOptions(
+        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume);
+  }
+
+  /** These options with {@code resume}. */
+  public RunOptions withResume(boolean resume) {
+    return new RunOptions(
+        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume);
+  }
+
+  /** These options with checkpoint intervals. */
+  public RunOptions withCheckpoints(int steps, double seconds) {
+    return new RunOptions(force, toolVersion, maxHeap, laws, steps, seconds, resume);
+  }
+
+  /** No force, this JVM's heap, the version of the fem3d package (or "development build"). */
+  public static RunOptions defaults() {
+    String v = RunOptions.class.getPackage().getImplementationVersion();
+    return new RunOptions(
+        false,
+        v == null ? "development build" : v,
+        Runtime.getRuntime().maxMemory(),
+        LawResolver.none(),
+        DEFAULT_CHECKPOINT_STEPS,
+        DEFAULT_CHECKPOINT_SECONDS,
+        false);
+  }
+
+  /** These options with {@code force}. */
+  public RunOptions withForce(boolean force) {
+    return new RunOptions(
+        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume);
+  }
+
+  /** These options with {@code version}. */
+  public RunOptions withToolVersion(String version) {
+    return new RunOptions(
+        force, version, maxHeap, laws, checkpointSteps, checkpointSeconds, resume);
+  }
+
+  /** These options with {@code maxHeap}. */
+  public RunOptions withMaxHeap(long maxHeap) {
+    return new RunOptions(
+        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume);
+  }
+}

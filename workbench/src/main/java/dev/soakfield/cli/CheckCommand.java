@@ -1,0 +1,219 @@
+package dev.soakfield.cli;
+
+import dev.soakfield.fem.casefile.CaseSpec;
+import dev.soakfield.fem.casefile.Diffusivity;
+import dev.soakfield.fem.casefile.FaceSpec;
+import dev.soakfield.fem.casefile.MaterialSpec;
+import dev.soakfield.fem.casefile.ProbeSpec;
+import dev.soakfield.fem.casefile.SourceSpec;
+import dev.soakfield.fem.casefile.StepControl;
+import dev.soakfield.fem.casefile.TimeTable;
+import dev.soakfield.fem.run.MemoryEstimate;
+import dev.soakfield.fem.run.RunPipeline;
+import dev.soakfield.fem.run.RunTimeEstimate;
+import dev.soakfield.fem.run.TimeText;
+import dev.soakfield.mesh.FaceGroup;
+import dev.soakfield.mesh.FaceGroupKind;
+import dev.soakfield.mesh.TetMesh;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code soakfield check CASE.json}: reads and checks the case and its mesh without solving, lists
+ * every problem at once (exit 2), or prints what will run (exit 0).
+ */
+@Command(
+    name = "check",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Checks a case file and its mesh without solving. Every problem is listed at once with its"
+          + " line, column and key path, with a close match for misspelt keys and group names"
+          + " (exit code 2).",
+      "A good case prints what will run: face groups and their partitions, materials, time span,"
+          + " outputs, element order, mesh size, memory and time estimates (exit code 0)."
+    })
+final class CheckCommand implements Callable<Integer> {
+  @Spec CommandSpec spec;
+
+  @Parameters(index = "0", paramLabel = "CASE.json", description = "The case file.")
+  Path caseFile;
+
+  @Override
+  public Integer call() {
+    RunPipeline.Prepared p = RunPipeline.prepare(caseFile);
+    PrintWriter out = spec.commandLine().getOut();
+    out.print(summary(p, Runtime.getRuntime().maxMemory()));
+    out.flush();
+    return ExitCodes.OK;
+  }
+
+  static String summary(RunPipeline.Prepared p, long maxHeap) {
+    CaseSpec c = p.spec();
+    TetMesh mesh = p.mesh();
+    StringBuilder sb = new StringBuilder();
+    sb.append("case ").append(c.caseFile()).append(": no problems found\n");
+    sb.append(
+        String.format(
+            Locale.ROOT,
+            "mesh %s: %d nodes, %d tetrahedra; elements %s (%d-node)%n",
+            c.mesh(),
+            mesh.nodeCount(),
+            mesh.tetCount(),
+            mesh.order() == 2 ? "quadratic" : "linear",
+            mesh.nodesPerTet()));
+    sb.append("materials:\n");
+    for (MaterialSpec m : c.materials().values()) {
+      sb.append(
+          String.format(
+              Locale.ROOT,
+              "  %-16s D = %s, S = %s, source %s%n",
+              m.volumeGroup(),
+              diffusivity(m.diffusivity()),
+              num(m.solubility()),
+              source(m.source())));
+    }
+    sb.append("face groups:\n");
+    List<String> unassigned = new ArrayList<>();
+    for (FaceGroup g : mesh.faceGroups()) {
+      FaceSpec f = c.faces().get(g.name());
+      String where = g.kind() == FaceGroupKind.EXTERIOR ? "exterior" : "interface";
+      String what;
+      if (f != null) {
+        what = partition(f);
+      } else if (g.kind() == FaceGroupKind.EXTERIOR) {
+        what = "sealed (no entry in faces: sealed by default)";
+        unassigned.add(g.name());
+      } else {
+        what = "continuous (material interface)";
+      }
+      sb.append(String.format(Locale.ROOT, "  %-16s %-9s %s%n", g.name(), where, what));
+    }
+    if (!unassigned.isEmpty()) {
+      sb.append("  unassigned exterior groups, sealed: ")
+          .append(String.join(", ", unassigned))
+          .append('\n');
+    }
+    sb.append(time(c));
+    sb.append("outputs: fields at ");
+    List<String> times = new ArrayList<>();
+    for (double t : c.time().outputTimes()) {
+      times.add(TimeText.of(t));
+    }
+    sb.append(String.join(", ", times)).append("; series.csv every step");
+    if (!c.probes().isEmpty()) {
+      List<String> names = new ArrayList<>();
+      for (ProbeSpec pr : c.probes()) {
+        names.add(pr.name());
+      }
+      sb.append("; probes ").append(String.join(", ", names));
+    }
+    if (c.threshold().isPresent()) {
+      sb.append("; threshold ").append(num(c.threshold().getAsDouble()));
+    }
+    sb.append('\n');
+    MemoryEstimate mem = MemoryEstimate.of(mesh, mesh.order());
+    sb.append(
+        String.format(
+            Locale.ROOT,
+            "memory: about %s of Java heap needed, %s available%s%n",
+            MemoryEstimate.megabytes(mem.bytes()),
+            MemoryEstimate.megabytes(maxHeap),
+            mem.bytes() > maxHeap
+                ? " - TOO SMALL: 'run' will refuse; raise it with JAVA_OPTS=-Xmx..."
+                : ""));
+    RunTimeEstimate est = RunTimeEstimate.of(c, mesh);
+    sb.append(
+        String.format(
+            Locale.ROOT,
+            "time: roughly %s of wall time for ~%d steps (an order-of-magnitude estimate from"
+                + " the step count and a measured cost per node and step)%n",
+            TimeText.of(est.seconds()),
+            est.steps()));
+    for (String w : p.warnings()) {
+      sb.append("warning: ").append(w).append('\n');
+    }
+    return sb.toString();
+  }
+
+  private static String time(CaseSpec c) {
+    String steps;
+    if (c.time().steps() instanceof StepControl.Fixed f) {
+      steps = "fixed steps of " + TimeText.of(f.step());
+    } else {
+      StepControl.Adaptive a = (StepControl.Adaptive) c.time().steps();
+      steps = "adaptive steps (tolerance " + num(a.tolerance()) + ")";
+    }
+    return String.format(
+        Locale.ROOT,
+        "time: 0 to %s (%s s), %s, %s, %s capacity%n",
+        TimeText.of(c.time().end()),
+        num(c.time().end()),
+        c.time().scheme().word(),
+        steps,
+        c.time().capacity().word());
+  }
+
+  private static String partition(FaceSpec f) {
+    String value = table(f.value());
+    return switch (f.kind()) {
+      case SEALED -> "sealed";
+      case CONCENTRATION -> "concentration " + value;
+      case FLUX -> "flux " + value + " amount/(m²·s)";
+      case EXCHANGE ->
+          "exchange with environment "
+              + (f.ambientValue() ? "ambient" : value)
+              + ", coefficient "
+              + table(f.coefficient())
+              + " m/s";
+      case AMBIENT -> "ambient (the exposure's humidity or gas pressure)";
+    };
+  }
+
+  private static String table(TimeTable t) {
+    if (t.isConstant()) {
+      return num(t.at(0));
+    }
+    return "table of " + t.breakpoints().length + " points";
+  }
+
+  private static String diffusivity(Diffusivity d) {
+    if (d.isIsotropic()) {
+      return num(d.xx()) + " m²/s";
+    }
+    return "tensor ["
+        + num(d.xx())
+        + ", "
+        + num(d.yy())
+        + ", "
+        + num(d.zz())
+        + "; "
+        + num(d.xy())
+        + ", "
+        + num(d.yz())
+        + ", "
+        + num(d.zx())
+        + "] m²/s";
+  }
+
+  private static String source(SourceSpec s) {
+    if (s instanceof SourceSpec.ConstantRate r) {
+      return "constant " + num(r.rate()) + " amount/(m³·s)";
+    }
+    if (s instanceof SourceSpec.FirstOrder r) {
+      return "first-order " + num(r.rate()) + " 1/s";
+    }
+    return s.kind();
+  }
+
+  private static String num(double v) {
+    return String.format(Locale.ROOT, "%.4g", v);
+  }
+}

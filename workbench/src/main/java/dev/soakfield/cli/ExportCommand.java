@@ -1,0 +1,198 @@
+package dev.soakfield.cli;
+
+import dev.soakfield.fem.assembly.CsrMatrix;
+import dev.soakfield.fem.casefile.TimeScheme;
+import dev.soakfield.fem.run.RebuiltRun;
+import dev.soakfield.fem.time.TimeSettings;
+import dev.soakfield.mesh.AtomicFiles;
+import dev.soakfield.report.SeriesCsv;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.OptionalDouble;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code soakfield export DIR --csv OUT.csv | --mtx OUT.mtx [--time T]}: the series with units in
+ * the header, or the system matrix of one step in Matrix Market format for cross-checking a solve
+ * with another tool.
+ */
+@Command(
+    name = "export",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Exports from a result folder: --csv the series and probe data with units in the header"
+          + " (c is the concentration unit of the case: amounts are c*m^3); --mtx the matrix"
+          + " M + theta*dt*L(t1) of one step (held rows and columns eliminated) in Matrix Market"
+          + " coordinate format, rebuilt from the folder's case.json and mesh.msh."
+    })
+final class ExportCommand implements Callable<Integer> {
+  @Spec CommandSpec spec;
+
+  @Parameters(index = "0", paramLabel = "DIR", description = "A result folder of 'soakfield run'.")
+  Path dir;
+
+  static final class Target {
+    @Option(names = "--csv", paramLabel = "OUT.csv", description = "Write the series as CSV.")
+    Path csv;
+
+    @Option(
+        names = "--mtx",
+        paramLabel = "OUT.mtx",
+        description = "Write one step's system matrix in Matrix Market format.")
+    Path mtx;
+  }
+
+  @ArgGroup(exclusive = true, multiplicity = "1")
+  Target target;
+
+  @Option(
+      names = "--time",
+      paramLabel = "T",
+      description =
+          "With --mtx: the step ending at the first recorded time >= T seconds (default: the"
+              + " first step).")
+  Double time;
+
+  @Override
+  public Integer call() throws Exception {
+    Path series = dir.resolve("series.csv");
+    if (!Files.isRegularFile(series)) {
+      throw new UserInputException(
+          dir + ": found no series.csv, expected a result folder written by 'soakfield run'");
+    }
+    PrintWriter out = spec.commandLine().getOut();
+    if (target.csv != null) {
+      if (time != null) {
+        throw new UserInputException("--time: found with --csv, expected it only with --mtx");
+      }
+      int rows = writeCsv(series, target.csv);
+      out.printf(Locale.ROOT, "wrote %d rows to %s%n", rows, target.csv);
+    } else {
+      out.println(writeMatrix(SeriesCsv.read(series), target.mtx));
+    }
+    out.flush();
+    return ExitCodes.OK;
+  }
+
+  /** The column name with its unit; columns this version does not know keep their name. */
+  static String withUnit(String name) {
+    String base = name.contains(":") ? name.substring(0, name.indexOf(':') + 1) : name;
+    String unit =
+        switch (base) {
+          case "time" -> "s";
+          case "amount", "amount:", "inflow:", "balance_error" -> "c*m^3";
+          case "max:", "probe:" -> "c";
+          case "inflow_rate:" -> "c*m^3/s";
+          default -> "";
+        };
+    return unit.isEmpty() ? name : name + " [" + unit + "]";
+  }
+
+  private static int writeCsv(Path series, Path csv) throws IOException {
+    List<String> lines = Files.readAllLines(series, StandardCharsets.UTF_8);
+    List<String> header = SeriesCsv.split(lines.get(0));
+    List<String> named = new ArrayList<>();
+    for (String h : header) {
+      String u = withUnit(h);
+      named.add(u.contains(",") || u.contains("\"") ? "\"" + u.replace("\"", "\"\"") + "\"" : u);
+    }
+    AtomicFiles.write(
+        csv,
+        f -> {
+          try (Writer w = Files.newBufferedWriter(f, StandardCharsets.UTF_8)) {
+            w.write(String.join(",", named));
+            w.write('\n');
+            for (int i = 1; i < lines.size(); i++) {
+              w.write(lines.get(i));
+              w.write('\n');
+            }
+          }
+        });
+    return lines.size() - 1;
+  }
+
+  private String writeMatrix(SeriesCsv series, Path mtx) throws IOException {
+    double[] t =
+        series
+            .column("time")
+            .orElseThrow(
+                () ->
+                    new UserInputException(
+                        dir + "/series.csv: found no column 'time', expected the series of a run"));
+    if (t.length < 2) {
+      throw new UserInputException(
+          dir + "/series.csv: found no step after t = 0, expected at least one step");
+    }
+    int k = stepIndex(t, time == null ? OptionalDouble.empty() : OptionalDouble.of(time));
+    RebuiltRun run = RebuiltRun.from(dir);
+    double dt = t[k] - t[k - 1];
+    // Crank-Nicolson runs start with backward-Euler steps; restarts after breakpoints are not
+    // recorded in the series, so later steps are taken as theta = 1/2
+    double theta =
+        run.spec().time().scheme() == TimeScheme.CRANK_NICOLSON && k > TimeSettings.START_STEPS
+            ? 0.5
+            : 1.0;
+    CsrMatrix a = run.stepper().systemMatrix(dt, theta, t[k]);
+    List<String> comments =
+        List.of(
+            "Soakfield system matrix M + theta*dt*L(t1), held rows and columns eliminated",
+            "result folder " + dir.toAbsolutePath(),
+            String.format(
+                Locale.ROOT,
+                "step %d: t0 = %s s, t1 = %s s, dt = %s s, theta = %s",
+                k,
+                t[k - 1],
+                t[k],
+                dt,
+                theta));
+    long[] entries = {0};
+    AtomicFiles.write(
+        mtx,
+        f -> {
+          try (Writer w = Files.newBufferedWriter(f, StandardCharsets.UTF_8)) {
+            entries[0] = MatrixMarketFile.write(w, a, comments);
+          }
+        });
+    return String.format(
+        Locale.ROOT,
+        "wrote the %d x %d matrix of step %d (t = %s s to %s s, %d stored entries) to %s",
+        a.size(),
+        a.size(),
+        k,
+        t[k - 1],
+        t[k],
+        entries[0],
+        mtx);
+  }
+
+  private int stepIndex(double[] t, OptionalDouble wanted) {
+    if (wanted.isEmpty()) {
+      return 1;
+    }
+    double w = wanted.getAsDouble();
+    for (int k = 1; k < t.length; k++) {
+      if (t[k] >= w * (1 - 1e-12)) {
+        return k;
+      }
+    }
+    throw new UserInputException(
+        String.format(
+            Locale.ROOT,
+            "--time: found %s s, expected a time up to the last recorded time %s s",
+            w,
+            t[t.length - 1]));
+  }
+}
