@@ -16,6 +16,8 @@ import picocli.CommandLine.Command;
       DemoCommand.class,
       VerifyCommand.class,
       BenchCommand.class,
+      GuiCommand.class,
+      RenderCommand.class,
       CommandLine.HelpCommand.class
     })
 public final class SoakfieldCli implements Runnable {
