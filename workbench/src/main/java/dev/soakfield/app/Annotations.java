@@ -26,6 +26,9 @@ public final class Annotations {
   /** A length in metres in the unit that reads best: m, mm or um (ASCII, for the bitmap font). */
   public static String length(double metres) {
     double a = Math.abs(metres);
+    if (a == 0) {
+      return "0 m";
+    }
     if (a >= 1) {
       return number(metres) + " m";
     }

@@ -4,8 +4,8 @@ package dev.soakfield.app;
  * Colours for face groups and parts, of our own: hues stepped by the golden angle (about 137.5°) in
  * {@link OkLab} at a fixed mid lightness and moderate chroma, so neighbouring indices differ
  * strongly and none stands out by brightness; the lightness cycles through three tones, so that
- * groups whose hues come close again (8 apart: 20°) still differ. Kept clear of the field ramp by being shown only when no
- * field is.
+ * groups whose hues come close again (8 apart: 20°) still differ. Kept clear of the field ramp by
+ * being shown only when no field is.
  */
 public final class FaceGroupPalette {
   private static final double GOLDEN_ANGLE_DEG = 137.50776405003785;

@@ -12,6 +12,9 @@ import java.util.Optional;
 public final class PickIndex {
   private static final int LEAF = 4;
 
+  /** Barycentric slack, so a ray through a shared edge or corner hits one of its triangles. */
+  private static final double EDGE = 1e-9;
+
   /** The nearest triangle a ray meets and the ray parameter there. */
   public record Hit(int triangle, double distance) {}
 
@@ -214,14 +217,14 @@ public final class PickIndex {
     double sy = oy - tri[o + 1];
     double sz = oz - tri[o + 2];
     double u = (sx * px + sy * py + sz * pz) * inv;
-    if (u < 0 || u > 1) {
+    if (u < -EDGE || u > 1 + EDGE) {
       return -1;
     }
     double qx = sy * e1z - sz * e1y;
     double qy = sz * e1x - sx * e1z;
     double qz = sx * e1y - sy * e1x;
     double v = (dx * qx + dy * qy + dz * qz) * inv;
-    if (v < 0 || u + v > 1) {
+    if (v < -EDGE || u + v > 1 + EDGE) {
       return -1;
     }
     return (e2x * qx + e2y * qy + e2z * qz) * inv;

@@ -157,6 +157,8 @@ final class Overlay {
 
   private void colourBar(Scene scene, FieldKind field, String unit, int w, int h, int ink) {
     int[] b = barBox(w, h);
+    // a backing in the picture's background, so labels stay readable over the part
+    rect(b[0] - 12, b[1] - 34, Math.min(w, b[2] + 90), b[3] + 28, SceneRenderer.BACKGROUND);
     ColourMap map = ColourMap.ramp();
     int steps = 64;
     for (int i = 0; i < steps; i++) {

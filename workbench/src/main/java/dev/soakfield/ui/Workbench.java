@@ -242,6 +242,11 @@ public final class Workbench implements AutoCloseable {
     return picked;
   }
 
+  /** The field at the last probe through the frames, when there are results. */
+  public Optional<double[]> probeCurve() {
+    return probeCurve;
+  }
+
   public OrbitCamera camera() {
     return camera;
   }
