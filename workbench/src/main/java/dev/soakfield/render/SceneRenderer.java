@@ -242,9 +242,16 @@ public final class SceneRenderer implements AutoCloseable {
       glBlendFuncSeparate(GL_SRC_ALPHA, GL_ONE_MINUS_SRC_ALPHA, GL_ONE, GL_ONE_MINUS_SRC_ALPHA);
       glDepthMask(false);
       glUniform1f(surfaceProgram.uniform("uAlpha"), settings.isoOpacity());
+      if (settings.section().isPresent()) {
+        // the isosurfaces keep to the side of the section that is shown
+        glEnable(GL_CLIP_DISTANCE0);
+        glUniform1i(surfaceProgram.uniform("uClipOn"), 1);
+      }
       for (GpuMesh m : isos) {
         m.draw(GL_TRIANGLES);
       }
+      glUniform1i(surfaceProgram.uniform("uClipOn"), 0);
+      glDisable(GL_CLIP_DISTANCE0);
       glDepthMask(true);
       glDisable(GL_BLEND);
     }
