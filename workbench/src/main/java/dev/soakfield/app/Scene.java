@@ -236,7 +236,7 @@ public final class Scene {
   }
 
   /** The unit normal of each triangle, repeated at its three corners. */
-  static float[] flatNormals(double[] c) {
+  public static float[] flatNormals(double[] c) {
     float[] n = new float[c.length];
     for (int t = 0; t < c.length / 9; t++) {
       int o = 9 * t;
@@ -278,6 +278,28 @@ public final class Scene {
 
   public Mesh surfaceMesh() {
     return surfaceMesh;
+  }
+
+  /** Surfaces above this many triangles get a reduced copy for drawing while the view moves. */
+  public static final int REDUCE_ABOVE = 20_000;
+
+  private static final int REDUCED_CELLS = 40;
+  private Mesh reduced;
+  private int reducedVersion = -1;
+
+  /**
+   * The surface to draw while the view moves: a vertex-clustered copy for big surfaces, the surface
+   * itself for small ones.
+   */
+  public Mesh movingSurfaceMesh() {
+    if (surfaceMesh.triangleCount() <= REDUCE_ABOVE) {
+      return surfaceMesh;
+    }
+    if (reducedVersion != version) {
+      reduced = ReducedSurface.of(surfaceMesh, REDUCED_CELLS);
+      reducedVersion = version;
+    }
+    return reduced;
   }
 
   public Mesh sectionMesh() {

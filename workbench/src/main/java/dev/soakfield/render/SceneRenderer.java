@@ -86,6 +86,9 @@ public final class SceneRenderer implements AutoCloseable {
   private final ShaderProgram surfaceProgram;
   private final ShaderProgram overlayProgram;
   private final GpuMesh surface = new GpuMesh();
+  private final GpuMesh movingSurface = new GpuMesh();
+  private int uploadedMoving = -1;
+  private int uploadedEdges = -1;
   private final GpuMesh section = new GpuMesh();
   private final GpuMesh edges = new GpuMesh();
   private final List<GpuMesh> isos = new ArrayList<>();
@@ -140,7 +143,6 @@ public final class SceneRenderer implements AutoCloseable {
     }
     surface.upload(scene.surfaceMesh());
     section.upload(scene.sectionMesh());
-    edges.upload(edgeLines(scene.surfaceMesh()));
     for (GpuMesh m : isos) {
       m.close();
     }
@@ -178,7 +180,20 @@ public final class SceneRenderer implements AutoCloseable {
    * is at (x0, y0) in GL window coordinates (y up).
    */
   public void draw(Scene scene, OrbitCamera cam, int x0, int y0) {
+    draw(scene, cam, x0, y0, false);
+  }
+
+  /**
+   * Draws one frame; while the view moves ({@code moving}), big surfaces are drawn reduced and the
+   * mesh edges left out, so turning stays fluid.
+   */
+  public void draw(Scene scene, OrbitCamera cam, int x0, int y0, boolean moving) {
     upload(scene);
+    boolean reduced = moving && scene.surfaceMesh().triangleCount() > Scene.REDUCE_ABOVE;
+    if (reduced && uploadedMoving != scene.version()) {
+      movingSurface.upload(scene.movingSurfaceMesh());
+      uploadedMoving = scene.version();
+    }
     int w = cam.width();
     int h = cam.height();
     glViewport(x0, y0, w, h);
@@ -223,11 +238,16 @@ public final class SceneRenderer implements AutoCloseable {
     }
     glEnable(GL_POLYGON_OFFSET_FILL);
     glPolygonOffset(1f, 1f);
-    surface.draw(GL_TRIANGLES);
+    (reduced ? movingSurface : surface).draw(GL_TRIANGLES);
     glUniform1i(surfaceProgram.uniform("uClipOn"), 0);
     section.draw(GL_TRIANGLES);
     glDisable(GL_POLYGON_OFFSET_FILL);
-    if (settings.edges()) {
+    if (settings.edges() && !reduced) {
+      if (uploadedEdges != scene.version()) {
+        // made only when asked for: twice the surface's corners, not needed for most frames
+        edges.upload(edgeLines(scene.surfaceMesh()));
+        uploadedEdges = scene.version();
+      }
       if (settings.section().isPresent()) {
         glUniform1i(surfaceProgram.uniform("uClipOn"), 1);
       }
@@ -275,6 +295,7 @@ public final class SceneRenderer implements AutoCloseable {
   @Override
   public void close() {
     surface.close();
+    movingSurface.close();
     section.close();
     edges.close();
     for (GpuMesh m : isos) {

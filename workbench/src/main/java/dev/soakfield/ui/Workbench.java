@@ -71,6 +71,7 @@ public final class Workbench implements AutoCloseable {
   private double lastStep;
   private boolean sectionOn;
   private int sectionAxis = 2;
+  private double[] sectionNormal = {0, 0, 1};
   private float sectionPos;
   private boolean isoOn;
   private float isoLevel;
@@ -281,7 +282,7 @@ public final class Workbench implements AutoCloseable {
     glDisable(GL_SCISSOR_TEST);
     glClearColor(0.93f, 0.93f, 0.92f, 1f);
     glClear(GL_COLOR_BUFFER_BIT | GL_DEPTH_BUFFER_BIT);
-    renderer.draw(scene, camera, LEFT, BOTTOM);
+    renderer.draw(scene, camera, LEFT, BOTTOM, dragButton >= 0 && dragged);
     ui.render(surface.width(), surface.height());
   }
 
@@ -408,24 +409,36 @@ public final class Workbench implements AutoCloseable {
     var ctx = ui.ctx;
     nk_layout_row_dynamic(ctx, 20, 1);
     boolean on = nk_check_label(ctx, "section plane", sectionOn);
-    nk_layout_row_dynamic(ctx, 20, 3);
+    nk_layout_row_dynamic(ctx, 20, 4);
     int axis = sectionAxis;
-    String[] labels = {"x", "y", "z"};
-    for (int a = 0; a < 3; a++) {
+    String[] labels = {"x", "y", "z", "view"};
+    for (int a = 0; a < 4; a++) {
       if (nk_option_label(ctx, labels[a], axis == a)) {
         axis = a;
       }
     }
-    double[] b = study.geometry().bounds();
+    if (axis == 3 && sectionAxis != 3) {
+      // across the line of sight: the plane faces the viewer as the view is now
+      var e = camera.towardsEye();
+      sectionNormal = new double[] {e.x, e.y, e.z};
+    }
+    double[] n =
+        axis == 3
+            ? sectionNormal
+            : new double[] {axis == 0 ? 1 : 0, axis == 1 ? 1 : 0, axis == 2 ? 1 : 0};
+    double[] range = extent(n);
     if (axis != sectionAxis) {
-      sectionPos = (float) ((b[axis] + b[3 + axis]) / 2);
+      sectionPos = (float) ((range[0] + range[1]) / 2);
     }
     nk_layout_row_dynamic(ctx, 20, 1);
     FloatBuffer pos = stack.floats(sectionPos);
-    float lo = (float) b[axis];
-    float hi = (float) b[3 + axis];
+    float lo = (float) range[0];
+    float hi = (float) range[1];
     nk_slider_float(ctx, lo, pos, hi, (hi - lo) / 200);
-    nk_label(ctx, labels[axis] + " = " + Annotations.length(pos.get(0)), NK_TEXT_LEFT);
+    nk_label(
+        ctx,
+        (axis == 3 ? "depth" : labels[axis]) + " = " + Annotations.length(pos.get(0)),
+        NK_TEXT_LEFT);
     if (on != sectionOn
         || axis != sectionAxis
         || pos.get(0) != sectionPos
@@ -435,11 +448,25 @@ public final class Workbench implements AutoCloseable {
       sectionPos = pos.get(0);
       settings.section(
           on
-              ? Optional.of(
-                  new ViewSettings.Plane(
-                      axis == 0 ? 1 : 0, axis == 1 ? 1 : 0, axis == 2 ? 1 : 0, sectionPos))
+              ? Optional.of(new ViewSettings.Plane(n[0], n[1], n[2], sectionPos))
               : Optional.empty());
     }
+  }
+
+  /** Smallest and largest n·x over the corners of the part's bounding box. */
+  private double[] extent(double[] n) {
+    double[] b = study.geometry().bounds();
+    double lo = Double.POSITIVE_INFINITY;
+    double hi = Double.NEGATIVE_INFINITY;
+    for (int k = 0; k < 8; k++) {
+      double d =
+          n[0] * b[(k & 1) * 3]
+              + n[1] * b[1 + ((k >> 1) & 1) * 3]
+              + n[2] * b[2 + ((k >> 2) & 1) * 3];
+      lo = Math.min(lo, d);
+      hi = Math.max(hi, d);
+    }
+    return new double[] {lo, hi};
   }
 
   private void isoControls(MemoryStack stack) {

@@ -73,7 +73,7 @@ class OffscreenPictureTest {
     int cold = rampIndex(sealed.getRGB(W / 2, H / 2));
     // xmin is held at c = 1, the top of the automatic range: the ramp's top end
     assertTrue(hot > 240, "exposed face at ramp entry " + hot);
-    // after 1 h (penetration about 3 mm of the 10 mm length) the far face is still near 0
+    // after 10 min (sqrt(D t) = 1.2 mm of the 10 mm length) the far face is still near 0
     assertTrue(cold < 60, "sealed face at ramp entry " + cold);
   }
 
