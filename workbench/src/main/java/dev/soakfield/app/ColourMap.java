@@ -5,8 +5,8 @@ package dev.soakfield.app;
  * in {@link OkLab}: lightness rises linearly from 0.28 (deep violet) to 0.92 (pale straw) while the
  * hue turns from 300° through blue and teal to 100° at a constant chroma of 0.09, so equal steps of
  * the value are equal steps of perceived colour and the lightness alone already orders values (it
- * reads in grey print and for common colour-vision deficiencies). The chroma is the largest that
- * keeps the whole path inside the sRGB gamut. Held as a 256-entry 8-bit table.
+ * reads in grey print and for common colour-vision deficiencies). The chroma is the largest in
+ * steps of 0.01 that keeps the whole path inside the sRGB gamut. Held as a 256-entry 8-bit table.
  */
 public final class ColourMap {
   public static final int SIZE = 256;

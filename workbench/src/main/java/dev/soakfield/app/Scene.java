@@ -176,6 +176,11 @@ public final class Scene {
   }
 
   private void cut(Optional<double[]> values, boolean[] shown) {
+    isoMeshes.clear();
+    sectionMesh = empty();
+    if (settings.section().isEmpty() && (values.isEmpty() || settings.isoLevels().isEmpty())) {
+      return; // nothing to cut: the time slider's usual case stays a recolouring
+    }
     PartGeometry g = study.geometry();
     boolean[] include = new boolean[g.tetCount()];
     boolean all = true;
@@ -185,8 +190,6 @@ public final class Scene {
       all &= include[t];
     }
     boolean[] inc = all ? new boolean[0] : include;
-    isoMeshes.clear();
-    sectionMesh = empty();
     double[] carried = values.orElseGet(() -> new double[g.nodeCount()]);
     if (settings.section().isPresent()) {
       ViewSettings.Plane p = settings.section().get();

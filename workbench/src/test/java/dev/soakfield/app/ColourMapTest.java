@@ -64,6 +64,22 @@ class ColourMapTest {
   }
 
   @Test
+  void rampPathLiesInsideTheSrgbGamutWithoutClamping() {
+    for (int i = 0; i < ColourMap.SIZE; i++) {
+      double t = i / (ColourMap.SIZE - 1.0);
+      double l = ColourMap.L_LOW + (ColourMap.L_HIGH - ColourMap.L_LOW) * t;
+      double h =
+          Math.toRadians(
+              ColourMap.HUE_LOW_DEG + (ColourMap.HUE_HIGH_DEG - ColourMap.HUE_LOW_DEG) * t);
+      double[] rgb =
+          OkLab.toLinearRgb(l, ColourMap.CHROMA * Math.cos(h), ColourMap.CHROMA * Math.sin(h));
+      for (double v : rgb) {
+        assertTrue(v >= 0 && v <= 1, "entry " + i + " outside sRGB: " + v);
+      }
+    }
+  }
+
+  @Test
   void paletteTellsNeighbouringGroupsApart() {
     for (int i = 0; i < 12; i++) {
       for (int j = i + 1; j < 12; j++) {

@@ -206,6 +206,34 @@ class ViewMathsTest {
   }
 
   @Test
+  void reducedSurfaceKeepsTheShapeWithFewerTriangles() {
+    TetMesh m = StructuredMesher.box(1, 1, 1, 20, 20, 20, 1);
+    Study study = Study.ofMesh(java.nio.file.Path.of("box"), m);
+    ViewSettings v = new ViewSettings();
+    v.field(Optional.empty());
+    Scene scene = new Scene(study, v);
+    Scene.Mesh full = scene.surfaceMesh();
+    // small surfaces are drawn whole even while moving
+    assertTrue(scene.movingSurfaceMesh() == full);
+    Scene.Mesh reduced = ReducedSurface.of(full, 10);
+    assertTrue(reduced.triangleCount() < 0.4 * full.triangleCount(), reduced.triangleCount() + "");
+    double area = 0;
+    double[] c = new double[reduced.positions.length];
+    for (int i = 0; i < c.length; i++) {
+      c[i] = reduced.positions[i];
+    }
+    for (int t = 0; t < reduced.triangleCount(); t++) {
+      area += triangle(c, t, new double[3]);
+    }
+    // exact geometry: the full box has area 6; cluster means pull only the cells along the edges
+    // inward, by under half a cell (0.05), so the area stays above 6 (1 - 2 x 0.05)^2 = 4.86
+    assertTrue(area > 4.86 && area <= 6 + 1e-9, "area " + area);
+    for (double x : c) {
+      assertTrue(x >= -1e-6 && x <= 1 + 1e-6);
+    }
+  }
+
+  @Test
   void annotationsUseRoundNumbersAndReadableUnits() {
     assertEquals(0.005, Annotations.roundLength(0.0073), 1e-18);
     assertEquals(0.02, Annotations.roundLength(0.02), 1e-18);
