@@ -9,7 +9,12 @@ import picocli.CommandLine.Spec;
     name = "bench",
     mixinStandardHelpOptions = true,
     description = "Measures speed against a reference in the same run and prints ratios.",
-    subcommands = {MeshImportBench.class, SolverBenchCommand.class, RunBenchCommand.class})
+    subcommands = {
+      MeshImportBench.class,
+      SolverBenchCommand.class,
+      RunBenchCommand.class,
+      RenderBenchCommand.class
+    })
 final class BenchCommand implements Runnable {
   @Spec CommandSpec spec;
 

@@ -22,6 +22,8 @@ import picocli.CommandLine.Command;
       FitCommand.class,
       BenchCommand.class,
       PluginsCommand.class,
+      GuiCommand.class,
+      RenderCommand.class,
       CommandLine.HelpCommand.class
     })
 public final class SoakfieldCli implements Runnable {

@@ -1,0 +1,223 @@
+package dev.soakfield.app;
+
+import java.util.Arrays;
+
+/**
+ * The outer surface of the shown parts: faces of shown tetrahedra that no other shown tetrahedron
+ * shares, so hiding a part opens the faces it shared with its neighbours. Each face of a 10-node
+ * tetrahedron is drawn as its four linear sub-triangles (through the mid-edge nodes), so quadratic
+ * fields show their mid-edge values. Triangles point outward (right-hand normal).
+ *
+ * <p>Faces are matched by an open-addressing table that stores only the face's id (tetrahedron × 4
+ * + local face) and compares corner sets by reading them back: 4 bytes a slot on meshes of millions
+ * of tetrahedra.
+ */
+public final class BoundarySurface {
+  /** Outward local faces of a positively oriented tetrahedron (corner 3 above face 0-1-2). */
+  static final int[][] FACES = {{0, 2, 1}, {0, 1, 3}, {1, 2, 3}, {0, 3, 2}};
+
+  /** MSH mid-edge node of edge (i, j) of a 10-node tetrahedron. */
+  private static final int[][] MID = {{-1, 4, 6, 7}, {4, -1, 5, 9}, {6, 5, -1, 8}, {7, 9, 8, -1}};
+
+  private final int[] triNodes;
+  private final int[] triGroup;
+  private final int[] triPart;
+  private final int[] triTet;
+
+  private BoundarySurface(int[] triNodes, int[] triGroup, int[] triPart, int[] triTet) {
+    this.triNodes = triNodes;
+    this.triGroup = triGroup;
+    this.triPart = triPart;
+    this.triTet = triTet;
+  }
+
+  /**
+   * The boundary of the parts with {@code shown[part]} true.
+   *
+   * @param shown one flag a part; shorter arrays show the parts beyond their end
+   */
+  public static BoundarySurface of(PartGeometry g, boolean[] shown) {
+    int per = g.nodesPerTet;
+    int tets = g.tetCount();
+    int[] table = new int[tableSize(4L * tets)];
+    Arrays.fill(table, -1);
+    int mask = table.length - 1;
+    int[] a = new int[3];
+    int[] b = new int[3];
+    for (int t = 0; t < tets; t++) {
+      int part = g.tetPart[t];
+      if (part < shown.length && !shown[part]) {
+        continue;
+      }
+      for (int f = 0; f < 4; f++) {
+        corners(g.tets, per, t, f, a);
+        int slot = hash(a) & mask;
+        while (true) {
+          int id = table[slot];
+          if (id == -1) {
+            table[slot] = 4 * t + f;
+            break;
+          }
+          int live = id >= 0 ? id : -id - 2;
+          corners(g.tets, per, live / 4, live % 4, b);
+          if (id >= 0 && a[0] == b[0] && a[1] == b[1] && a[2] == b[2]) {
+            table[slot] = -id - 2; // shared by two shown tetrahedra: inside
+            break;
+          }
+          slot = (slot + 1) & mask;
+        }
+      }
+    }
+    int[] groupTable = faceGroupTable(g);
+    int sub = per == 4 ? 1 : 4;
+    int count = 0;
+    for (int id : table) {
+      if (id >= 0) {
+        count++;
+      }
+    }
+    int[] nodes = new int[3 * sub * count];
+    int[] group = new int[sub * count];
+    int[] partOf = new int[sub * count];
+    int[] tetOf = new int[sub * count];
+    int n = 0;
+    int gmask = groupTable.length - 1;
+    for (int id : table) {
+      if (id < 0) {
+        continue;
+      }
+      int t = id / 4;
+      int[] lf = FACES[id % 4];
+      corners(g.tets, per, t, id % 4, a);
+      int fg = -1;
+      if (groupTable.length > 0) {
+        int slot = hash(a) & gmask;
+        while (groupTable[slot] != -1) {
+          int face = groupTable[slot];
+          faceCorners(g, face, b);
+          if (a[0] == b[0] && a[1] == b[1] && a[2] == b[2]) {
+            fg = g.faceGroupOfFace[face];
+            break;
+          }
+          slot = (slot + 1) & gmask;
+        }
+      }
+      int base = t * per;
+      int c0 = g.tets[base + lf[0]];
+      int c1 = g.tets[base + lf[1]];
+      int c2 = g.tets[base + lf[2]];
+      if (per == 4) {
+        n = put(nodes, group, partOf, tetOf, n, c0, c1, c2, fg, g.tetPart[t], t);
+      } else {
+        int m01 = g.tets[base + MID[lf[0]][lf[1]]];
+        int m12 = g.tets[base + MID[lf[1]][lf[2]]];
+        int m20 = g.tets[base + MID[lf[2]][lf[0]]];
+        n = put(nodes, group, partOf, tetOf, n, c0, m01, m20, fg, g.tetPart[t], t);
+        n = put(nodes, group, partOf, tetOf, n, m01, c1, m12, fg, g.tetPart[t], t);
+        n = put(nodes, group, partOf, tetOf, n, m20, m12, c2, fg, g.tetPart[t], t);
+        n = put(nodes, group, partOf, tetOf, n, m01, m12, m20, fg, g.tetPart[t], t);
+      }
+    }
+    return new BoundarySurface(nodes, group, partOf, tetOf);
+  }
+
+  private static int put(
+      int[] nodes,
+      int[] group,
+      int[] part,
+      int[] tet,
+      int n,
+      int a,
+      int b,
+      int c,
+      int fg,
+      int p,
+      int t) {
+    nodes[3 * n] = a;
+    nodes[3 * n + 1] = b;
+    nodes[3 * n + 2] = c;
+    group[n] = fg;
+    part[n] = p;
+    tet[n] = t;
+    return n + 1;
+  }
+
+  private static int[] faceGroupTable(PartGeometry g) {
+    int faces = g.faces.length / g.nodesPerFace;
+    if (faces == 0) {
+      return new int[0];
+    }
+    int[] table = new int[tableSize(faces)];
+    Arrays.fill(table, -1);
+    int mask = table.length - 1;
+    int[] a = new int[3];
+    for (int f = 0; f < faces; f++) {
+      faceCorners(g, f, a);
+      int slot = hash(a) & mask;
+      while (table[slot] != -1) {
+        slot = (slot + 1) & mask;
+      }
+      table[slot] = f;
+    }
+    return table;
+  }
+
+  private static void faceCorners(PartGeometry g, int face, int[] out) {
+    int base = face * g.nodesPerFace;
+    sort3(g.faces[base], g.faces[base + 1], g.faces[base + 2], out);
+  }
+
+  private static void corners(int[] tets, int per, int t, int f, int[] out) {
+    int[] lf = FACES[f];
+    int base = t * per;
+    sort3(tets[base + lf[0]], tets[base + lf[1]], tets[base + lf[2]], out);
+  }
+
+  private static void sort3(int x, int y, int z, int[] out) {
+    int lo = Math.min(x, Math.min(y, z));
+    int hi = Math.max(x, Math.max(y, z));
+    out[0] = lo;
+    out[1] = x + y + z - lo - hi;
+    out[2] = hi;
+  }
+
+  private static int hash(int[] k) {
+    int h = k[0] * 0x9E3779B1;
+    h = (h ^ (h >>> 15)) + k[1] * 0x85EBCA77;
+    h = (h ^ (h >>> 13)) + k[2] * 0xC2B2AE3D;
+    return h ^ (h >>> 16);
+  }
+
+  private static int tableSize(long entries) {
+    long size = Long.highestOneBit(Math.max(16, 2 * entries - 1)) << 1;
+    if (size > 1 << 30) {
+      throw new IllegalArgumentException(
+          "mesh too large for the surface table: " + entries + " faces");
+    }
+    return (int) size;
+  }
+
+  public int triangleCount() {
+    return triGroup.length;
+  }
+
+  /** Mesh node of corner k (0..2) of triangle t. */
+  public int node(int t, int k) {
+    return triNodes[3 * t + k];
+  }
+
+  /** Face group index of triangle t, or -1 for a face no group holds (opened by a hidden part). */
+  public int faceGroup(int t) {
+    return triGroup[t];
+  }
+
+  /** Part (volume group) of the tetrahedron triangle t bounds. */
+  public int part(int t) {
+    return triPart[t];
+  }
+
+  /** Tetrahedron triangle t bounds. */
+  public int tet(int t) {
+    return triTet[t];
+  }
+}

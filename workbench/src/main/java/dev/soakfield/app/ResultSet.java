@@ -1,0 +1,202 @@
+package dev.soakfield.app;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.soakfield.mesh.MeshInputException;
+import dev.soakfield.mesh.TetMesh;
+import dev.soakfield.mesh.load.MeshLoader;
+import dev.soakfield.mesh.topo.AssemblyOptions;
+import dev.soakfield.mesh.vtk.PvdEntry;
+import dev.soakfield.mesh.vtk.PvdReader;
+import dev.soakfield.mesh.vtk.VtuGrid;
+import dev.soakfield.mesh.vtk.VtuReader;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * A result folder written by {@code soakfield run}: the mesh it used (for the face groups, which
+ * the field files do not hold), the frames listed in fields.pvd (read when first asked for, a few
+ * kept), series.csv and summary.json.
+ */
+public final class ResultSet {
+  private static final int FRAMES_KEPT = 4;
+
+  private final Path folder;
+  private final TetMesh mesh;
+  private final List<PvdEntry> frames;
+  private final Optional<SeriesTable> series;
+  private final Optional<JsonNode> summary;
+  private final Map<Integer, VtuGrid> cache =
+      new LinkedHashMap<>(8, 0.75f, true) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<Integer, VtuGrid> e) {
+          return size() > FRAMES_KEPT;
+        }
+      };
+
+  private ResultSet(
+      Path folder,
+      TetMesh mesh,
+      List<PvdEntry> frames,
+      Optional<SeriesTable> series,
+      Optional<JsonNode> summary) {
+    this.folder = folder;
+    this.mesh = mesh;
+    this.frames = frames;
+    this.series = series;
+    this.summary = summary;
+  }
+
+  /** True when {@code dir} looks like a result folder (it holds fields.pvd). */
+  public static boolean isResultFolder(Path dir) {
+    return Files.isRegularFile(dir.resolve("fields.pvd"));
+  }
+
+  /**
+   * Opens a result folder.
+   *
+   * @throws MeshInputException when fields.pvd, the mesh or a file they name is missing or does not
+   *     fit the others (the message names the file)
+   */
+  public static ResultSet open(Path folder) {
+    Path pvd = folder.resolve("fields.pvd");
+    List<PvdEntry> frames = PvdReader.read(pvd);
+    Optional<JsonNode> summary = readSummary(folder.resolve("summary.json"));
+    Path meshFile = meshFile(folder, summary);
+    TetMesh mesh = MeshLoader.load(meshFile, AssemblyOptions.defaults()).mesh();
+    ResultSet r =
+        new ResultSet(
+            folder,
+            mesh,
+            frames,
+            Files.isRegularFile(folder.resolve("series.csv"))
+                ? Optional.of(SeriesTable.read(folder.resolve("series.csv")))
+                : Optional.empty(),
+            summary);
+    VtuGrid first = r.frame(0);
+    if (first.pointCount() != mesh.nodeCount() || first.cellCount() != mesh.tetCount()) {
+      throw new MeshInputException(
+          r.framePath(0).toString(),
+          "",
+          first.pointCount() + " points and " + first.cellCount() + " cells",
+          "the "
+              + mesh.nodeCount()
+              + " nodes and "
+              + mesh.tetCount()
+              + " tetrahedra of the mesh "
+              + meshFile);
+    }
+    return r;
+  }
+
+  private static Path meshFile(Path folder, Optional<JsonNode> summary) {
+    Path local = folder.resolve("mesh.msh");
+    if (Files.isRegularFile(local)) {
+      return local;
+    }
+    String named = summary.map(s -> s.path("mesh").path("file").asText("")).orElse("");
+    if (named.isEmpty()) {
+      throw new MeshInputException(
+          folder.toString(),
+          "",
+          "neither mesh.msh nor a mesh.file entry in summary.json",
+          "the mesh the run used (face groups are not in the field files)");
+    }
+    Path p = Path.of(named);
+    if (!p.isAbsolute() && !Files.isRegularFile(p)) {
+      p = folder.resolve(named);
+    }
+    if (!Files.isRegularFile(p)) {
+      throw new MeshInputException(
+          folder.resolve("summary.json").toString(),
+          "mesh.file",
+          "'" + named + "', which does not exist",
+          "the mesh the run used; copy it into the result folder as mesh.msh");
+    }
+    return p;
+  }
+
+  private static Optional<JsonNode> readSummary(Path file) {
+    if (!Files.isRegularFile(file)) {
+      return Optional.empty();
+    }
+    try {
+      return Optional.of(new ObjectMapper().readTree(file.toFile()));
+    } catch (IOException e) {
+      throw new MeshInputException(
+          file.toString(), "", "unreadable JSON (" + e.getMessage() + ")", "summary.json");
+    }
+  }
+
+  public Path folder() {
+    return folder;
+  }
+
+  public TetMesh mesh() {
+    return mesh;
+  }
+
+  public int frameCount() {
+    return frames.size();
+  }
+
+  public double time(int frame) {
+    return frames.get(frame).time();
+  }
+
+  /** The frame whose time is nearest {@code t}. */
+  public int frameNear(double t) {
+    int best = 0;
+    for (int i = 1; i < frames.size(); i++) {
+      if (Math.abs(frames.get(i).time() - t) < Math.abs(frames.get(best).time() - t)) {
+        best = i;
+      }
+    }
+    return best;
+  }
+
+  public Optional<SeriesTable> series() {
+    return series;
+  }
+
+  /** The threshold of the run, if it had one. */
+  public Optional<Double> threshold() {
+    return summary
+        .map(s -> s.path("threshold").path("value"))
+        .filter(JsonNode::isNumber)
+        .map(JsonNode::asDouble);
+  }
+
+  private Path framePath(int frame) {
+    return folder.resolve(frames.get(frame).relativeFile());
+  }
+
+  /** The grid of one frame, read on first use. */
+  public synchronized VtuGrid frame(int frame) {
+    return cache.computeIfAbsent(frame, f -> VtuReader.read(framePath(f)));
+  }
+
+  /**
+   * The nodal field of one frame.
+   *
+   * @throws MeshInputException when the frame's file lacks it
+   */
+  public double[] field(int frame, FieldKind kind) {
+    VtuGrid g = frame(frame);
+    if (!g.pointFieldNames().contains(kind.fileName)) {
+      throw new MeshInputException(
+          framePath(frame).toString(),
+          "PointData",
+          "the fields " + g.pointFieldNames(),
+          "a point field '" + kind.fileName + "'");
+    }
+    return g.pointField(kind.fileName);
+  }
+}

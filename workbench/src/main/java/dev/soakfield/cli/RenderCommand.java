@@ -1,0 +1,246 @@
+package dev.soakfield.cli;
+
+import dev.soakfield.app.FieldKind;
+import dev.soakfield.app.OrbitCamera;
+import dev.soakfield.app.ResultSet;
+import dev.soakfield.app.Scene;
+import dev.soakfield.app.Study;
+import dev.soakfield.app.ViewSettings;
+import dev.soakfield.render.OffscreenPicture;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code soakfield render}: a picture of a result with no window, for reports and scripts. */
+@Command(
+    name = "render",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Draws a result (or a mesh) to a PNG with no window: off screen under a display, or with"
+          + " OSMesa where there is none. The picture carries the colour bar (field, unit, limits),"
+          + " the axis triad, a length scale and the time."
+    })
+final class RenderCommand implements Callable<Integer> {
+  @Spec CommandSpec spec;
+
+  @Parameters(
+      index = "0",
+      paramLabel = "RESULTS_DIR",
+      description = "Result folder (or a .msh or case .json).")
+  Path input;
+
+  @Option(
+      names = "--time",
+      paramLabel = "T",
+      description =
+          "Time of the frame, seconds or with a unit (90min, 168h, 7d); the nearest frame is drawn (default: the last).")
+  String time;
+
+  @Option(
+      names = "--field",
+      defaultValue = "c",
+      paramLabel = "NAME",
+      description =
+          "c, phi, first_exceed, or groups for the face groups in their colours (default: ${DEFAULT-VALUE}).")
+  String field;
+
+  @Option(
+      names = "--view",
+      defaultValue = "iso",
+      paramLabel = "VIEW",
+      description =
+          "iso, xmin, xmax, ymin, ymax, zmin or zmax: the side looked at (default: ${DEFAULT-VALUE}).")
+  String view;
+
+  @Option(
+      names = "--section",
+      paramLabel = "AXIS:POS",
+      description = "Cut along a plane, e.g. z:2mm; the part beyond it is taken away.")
+  String section;
+
+  @Option(
+      names = "--iso",
+      paramLabel = "LEVEL",
+      split = ",",
+      description = "Isosurface levels of the field (repeat or separate by commas).")
+  List<Double> iso = new ArrayList<>();
+
+  @Option(names = "--range", paramLabel = "LOW:HIGH", description = "Fixed colour limits.")
+  String range;
+
+  @Option(names = "--edges", description = "Draw the mesh edges.")
+  boolean edges;
+
+  @Option(
+      names = "--unit",
+      defaultValue = "case units",
+      paramLabel = "TEXT",
+      description = "Unit of c and phi for the colour bar, e.g. kg/m3 (default: ${DEFAULT-VALUE}).")
+  String unit;
+
+  @Option(
+      names = "--size",
+      defaultValue = "1024x768",
+      paramLabel = "WxH",
+      description = "Picture size in pixels (default: ${DEFAULT-VALUE}).")
+  String size;
+
+  @Option(names = "--out", required = true, paramLabel = "PIC.png", description = "The picture.")
+  Path out;
+
+  @Override
+  public Integer call() throws IOException {
+    int[] wh = size(size);
+    Study study = Study.open(input);
+    ViewSettings settings = settings(study);
+    OrbitCamera camera = new OrbitCamera();
+    try {
+      camera.look(OrbitCamera.View.parse(view));
+    } catch (IllegalArgumentException e) {
+      throw new UserInputException("--view: " + e.getMessage());
+    }
+    camera.viewport(wh[0], wh[1]);
+    camera.fit(study.geometry().bounds());
+    Scene scene = new Scene(study, settings);
+    BufferedImage img;
+    try (OffscreenPicture pic = new OffscreenPicture(wh[0], wh[1])) {
+      pic.renderer().unit(unit);
+      img = pic.render(scene, camera);
+    }
+    OffscreenPicture.writePng(img, out);
+    PrintWriter o = spec.commandLine().getOut();
+    o.println("picture: " + out + " (" + wh[0] + "x" + wh[1] + ")");
+    study
+        .results()
+        .ifPresent(
+            r ->
+                o.printf(
+                    Locale.ROOT,
+                    "frame %d of %d, t = %s s; colour limits %s .. %s%n",
+                    settings.frame() + 1,
+                    r.frameCount(),
+                    r.time(settings.frame()),
+                    scene.low(),
+                    scene.high()));
+    o.flush();
+    return ExitCodes.OK;
+  }
+
+  private ViewSettings settings(Study study) {
+    ViewSettings s = new ViewSettings();
+    Optional<ResultSet> r = study.results();
+    if (field.equalsIgnoreCase("groups") || r.isEmpty()) {
+      s.field(Optional.empty());
+    } else {
+      try {
+        s.field(Optional.of(FieldKind.parse(field)));
+      } catch (IllegalArgumentException e) {
+        throw new UserInputException("--field: " + e.getMessage() + " (or groups)");
+      }
+    }
+    if (r.isPresent()) {
+      s.frame(time == null ? r.get().frameCount() - 1 : r.get().frameNear(seconds(time)));
+    }
+    if (section != null) {
+      s.section(Optional.of(plane(section)));
+    }
+    if (!iso.isEmpty()) {
+      if (s.field().isEmpty()) {
+        throw new UserInputException("--iso: isosurfaces need a field from a result folder");
+      }
+      s.isoLevels(iso);
+    }
+    if (range != null) {
+      String[] p = range.split(":", -1);
+      try {
+        s.range(Double.parseDouble(p[0]), Double.parseDouble(p[p.length - 1]));
+        if (p.length != 2) {
+          throw new NumberFormatException();
+        }
+      } catch (IllegalArgumentException e) {
+        throw new UserInputException(
+            "--range: found '" + range + "', expected LOW:HIGH with LOW below HIGH, e.g. 0:2.5");
+      }
+    }
+    s.edges(edges);
+    return s;
+  }
+
+  static int[] size(String text) {
+    String[] p = text.toLowerCase(Locale.ROOT).split("x", -1);
+    try {
+      if (p.length == 2) {
+        int w = Integer.parseInt(p[0].strip());
+        int h = Integer.parseInt(p[1].strip());
+        if (w >= 64 && h >= 64 && w <= 8192 && h <= 8192) {
+          return new int[] {w, h};
+        }
+      }
+    } catch (NumberFormatException e) {
+      // the message below
+    }
+    throw new UserInputException(
+        "--size: found '"
+            + text
+            + "', expected WIDTHxHEIGHT in pixels, 64 to 8192 each, e.g. 1024x768");
+  }
+
+  /** Seconds of a time typed as 3600, 90min, 168h or 7d. */
+  static double seconds(String text) {
+    String t = text.strip().toLowerCase(Locale.ROOT);
+    double factor = 1;
+    String[][] units = {{"min", "60"}, {"s", "1"}, {"h", "3600"}, {"d", "86400"}};
+    for (String[] u : units) {
+      if (t.endsWith(u[0])) {
+        factor = Double.parseDouble(u[1]);
+        t = t.substring(0, t.length() - u[0].length()).strip();
+        break;
+      }
+    }
+    try {
+      double v = Double.parseDouble(t) * factor;
+      if (Double.isFinite(v)) {
+        return v;
+      }
+    } catch (NumberFormatException e) {
+      // the message below
+    }
+    throw new UserInputException(
+        "--time: found '" + text + "', expected a time such as 3600, 90min, 168h or 7d");
+  }
+
+  /** A plane AXIS:POS with POS a length that may be zero or negative and may carry a unit. */
+  static ViewSettings.Plane plane(String text) {
+    String[] p = text.split(":", -1);
+    if (p.length == 2) {
+      String pos = p[1].strip();
+      boolean negative = pos.startsWith("-");
+      String magnitude = negative ? pos.substring(1) : pos;
+      String digits = magnitude.replaceAll("[a-zµ\\s]+$", "");
+      double metres;
+      try {
+        metres = Double.parseDouble(digits) == 0 ? 0 : Lengths.parse(magnitude, "--section");
+      } catch (NumberFormatException e) {
+        metres = Lengths.parse(magnitude, "--section"); // names the option and the text
+      }
+      try {
+        return ViewSettings.Plane.parse(p[0] + ":" + (negative ? -metres : metres));
+      } catch (IllegalArgumentException e) {
+        throw new UserInputException("--section: " + e.getMessage());
+      }
+    }
+    throw new UserInputException(
+        "--section: found '" + text + "', expected AXIS:POS with AXIS x, y or z (e.g. z:2mm)");
+  }
+}

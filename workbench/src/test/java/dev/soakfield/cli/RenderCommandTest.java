@@ -1,0 +1,87 @@
+package dev.soakfield.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import dev.soakfield.app.SoakedBox;
+import dev.soakfield.render.GlAvailable;
+import dev.soakfield.render.GlRuntime;
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class RenderCommandTest {
+  @TempDir Path dir;
+
+  @Test
+  void rendersAResultFolderToAPngOfTheAskedSize() throws Exception {
+    GlAvailable.orSkip();
+    Path results = SoakedBox.make(dir);
+    Path pic = dir.resolve("pic.png");
+    CliRun r =
+        CliRun.of(
+            "render",
+            results.toString(),
+            "--time",
+            "10min",
+            "--field",
+            "c",
+            "--view",
+            "xmin",
+            "--section",
+            "z:2mm",
+            "--iso",
+            "0.5",
+            "--size",
+            "320x240",
+            "--out",
+            pic.toString());
+    assertEquals(0, r.exitCode(), r.err());
+    // --time 10min picks the frame at 600 s, the nearest of 0, 600 and 3600 s
+    assertTrue(r.out().contains("frame 2 of 3, t = 600.0 s"), r.out());
+    BufferedImage img = ImageIO.read(pic.toFile());
+    assertEquals(320, img.getWidth());
+    assertEquals(240, img.getHeight());
+  }
+
+  @Test
+  void badOptionsAreNamedAndNothingIsWritten() throws Exception {
+    GlAvailable.orSkip();
+    Path results = SoakedBox.make(dir);
+    Path pic = dir.resolve("never.png");
+    CliRun view =
+        CliRun.of("render", results.toString(), "--view", "front", "--out", pic.toString());
+    assertEquals(2, view.exitCode());
+    assertTrue(view.err().contains("--view: view: found 'front', expected iso, xmin"), view.err());
+    CliRun section =
+        CliRun.of("render", results.toString(), "--section", "w:1", "--out", pic.toString());
+    assertEquals(2, section.exitCode());
+    assertTrue(section.err().contains("--section"), section.err());
+    CliRun field =
+        CliRun.of("render", results.toString(), "--field", "rh", "--out", pic.toString());
+    assertEquals(2, field.exitCode());
+    assertTrue(field.err().contains("found 'rh', expected c, phi or first_exceed"), field.err());
+    CliRun folder = CliRun.of("render", dir.toString(), "--out", pic.toString());
+    assertEquals(2, folder.exitCode());
+    assertTrue(folder.err().contains("a folder without fields.pvd"), folder.err());
+    assertFalse(Files.exists(pic));
+  }
+
+  @Test
+  void guiWithoutADisplaySaysHowToWorkHeadless() {
+    GlAvailable.orSkip();
+    if (GlRuntime.whyNoWindow().isEmpty()) {
+      System.err.println("gui headless message not checked: a display answers here");
+    }
+    assumeTrue(GlRuntime.whyNoWindow().isPresent(), "a display answers here");
+    CliRun r = CliRun.of("gui", dir.toString());
+    assertEquals(2, r.exitCode());
+    assertTrue(r.err().contains("no display"), r.err());
+    assertTrue(r.err().contains("soakfield render RESULTS_DIR"), r.err());
+  }
+}
