@@ -122,6 +122,7 @@ final class RunCommand implements Callable<Integer> {
       throw e;
     }
     progress.done();
+    FieldPictures.draw(s.outputFolder(), err);
     ReportWriter.write(s.outputFolder());
     if (!quiet) {
       report(spec.commandLine().getOut(), s);
