@@ -13,6 +13,8 @@ final class MaterialBinder {
   private static final Set<String> MATERIAL_KEYS =
       Set.of("diffusivity", "solubility", "source", "density");
   private static final Set<String> TENSOR_KEYS = Set.of("principal", "axes", "D0", "Q");
+  // far above any solid or liquid (gases diffuse at ~1e-5 m²/s): a larger value is a typing mistake
+  private static final double MAX_D = 1.0;
   private static final Set<String> SOLUBILITY_KEYS = Set.of("S0", "dH");
   private static final String ENERGY = "an energy in J/mol (or with a unit: \"42 kJ/mol\")";
   private static final String POSITIVE_D = "a positive number (m²/s)";
@@ -158,6 +160,10 @@ final class MaterialBinder {
               path,
               "m^2/s",
               POSITIVE_D + " or {\"principal\": [...], \"axes\": [...]} or {\"D0\", \"Q\"}");
+      if (d.isPresent() && d.getAsDouble() > MAX_D) {
+        fields.problems().found(node, path, POSITIVE_D + " up to " + MAX_D + " m²/s");
+        return Optional.empty();
+      }
       return d.isPresent() ? Optional.of(Diffusivity.isotropic(d.getAsDouble())) : Optional.empty();
     }
     fields.onlyKeys(obj, path, TENSOR_KEYS);
