@@ -39,18 +39,18 @@ public final class DiffusionModel {
       double[] constantRate,
       List<FaceCondition> faces,
       double[] initialPhi) {
-    this.space = Objects.requireNonNull(space, "space");
-    int tets = space.mesh().tetCount();
-    this.solubility = check(solubility, tets, "solubility");
-    this.conductance = check(conductance, 6 * tets, "conductance");
-    this.firstOrderRate = check(firstOrderRate, tets, "firstOrderRate");
-    this.constantRate = check(constantRate, tets, "constantRate");
-    this.faces = List.copyOf(faces);
-    this.initialPhi = check(initialPhi, space.dofCount(), "initialPhi");
-    this.tetMaterial = new int[tets];
-    this.materials = List.of(MaterialBehaviour.constant("all"));
-    this.temperature = TimeFunction.constant(ROOM_TEMPERATURE);
-    this.law = Law.PLAIN;
+    this(
+        space,
+        solubility,
+        conductance,
+        firstOrderRate,
+        constantRate,
+        faces,
+        initialPhi,
+        new int[space.mesh().tetCount()],
+        List.of(MaterialBehaviour.constant("all")),
+        TimeFunction.constant(ROOM_TEMPERATURE),
+        Law.PLAIN);
   }
 
   /**
