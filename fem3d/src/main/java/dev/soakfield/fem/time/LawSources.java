@@ -274,6 +274,11 @@ final class LawSources {
     return out;
   }
 
+  /** Total amount the committed states hold (no copies). */
+  double heldNow(double kelvin) {
+    return held(committedView(), kelvin);
+  }
+
   /** Total amount the given states hold. */
   double held(double[][] states, double kelvin) {
     double s = 0;

@@ -331,7 +331,7 @@ public final class ThetaStepper {
   /** The mobile amount 1ᵀ M(T(t)) φ plus what the committed law states hold. */
   public double amount(double[] phi, double t) {
     double mobile = dot(coefficients(t).capacityRowSums, phi);
-    return laws.isEmpty() ? mobile : mobile + laws.held(laws.committed(), temperatureAt(t));
+    return laws.isEmpty() ? mobile : mobile + laws.heldNow(temperatureAt(t));
   }
 
   /** Amount held by the committed source-law states per volume group (zeros without laws). */
@@ -644,7 +644,7 @@ public final class ThetaStepper {
     double[][] states = null;
     if (!laws.isEmpty()) {
       states = laws.advance(phi1, t1, dt, kelvin);
-      double heldStart = laws.held(laws.committed(), temperatureAt(t0));
+      double heldStart = laws.heldNow(temperatureAt(t0));
       double heldEnd = laws.held(states, kelvin);
       // net production: what the laws' sources gave the mobile field, less what their states took
       source += dt * sum(q) + (heldEnd - heldStart);
