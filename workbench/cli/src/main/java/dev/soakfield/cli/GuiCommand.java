@@ -1,8 +1,8 @@
 package dev.soakfield.cli;
 
 import dev.soakfield.app.Study;
-import dev.soakfield.render.GlRuntime;
-import dev.soakfield.ui.Workbench;
+import dev.soakfield.app.GraphicsServices;
+import dev.soakfield.app.WindowLauncher;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -32,7 +32,10 @@ final class GuiCommand implements Callable<Integer> {
 
   @Override
   public Integer call() {
-    Optional<String> noWindow = GlRuntime.whyNoWindow();
+    WindowLauncher window =
+        GraphicsServices.window()
+            .orElseThrow(() -> new UserInputException("gui: " + GraphicsServices.NO_WINDOW));
+    Optional<String> noWindow = window.whyNoWindow();
     if (noWindow.isPresent()) {
       throw new UserInputException(
           "gui: no display to open a window on ("
@@ -42,7 +45,7 @@ final class GuiCommand implements Callable<Integer> {
               + " display: xvfb-run -a soakfield gui ...");
     }
     Optional<Study> study = input == null ? Optional.empty() : Optional.of(Study.open(input));
-    Workbench.run(study);
+    window.open(study);
     return ExitCodes.OK;
   }
 }

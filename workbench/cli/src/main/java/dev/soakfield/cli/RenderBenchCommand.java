@@ -1,6 +1,7 @@
 package dev.soakfield.cli;
 
-import dev.soakfield.render.RenderBench;
+import dev.soakfield.app.GraphicsServices;
+import dev.soakfield.app.ViewBenchmark;
 import java.io.IOException;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -33,11 +34,15 @@ final class RenderBenchCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws IOException {
+    ViewBenchmark bench =
+        GraphicsServices.viewBenchmark()
+            .orElseThrow(
+                () -> new UserInputException("bench render: " + GraphicsServices.NO_WINDOW));
     if (cells < 2 || cells > 120) {
       throw new UserInputException("--cells: found " + cells + ", expected 2 to 120");
     }
     int[] wh = RenderCommand.size(size);
-    RenderBench.run(spec.commandLine().getOut(), cells, wh[0], wh[1]);
+    bench.measure(spec.commandLine().getOut(), cells, wh[0], wh[1]);
     return ExitCodes.OK;
   }
 }

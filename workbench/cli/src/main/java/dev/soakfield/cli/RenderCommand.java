@@ -1,12 +1,14 @@
 package dev.soakfield.cli;
 
 import dev.soakfield.app.FieldKind;
+import dev.soakfield.app.GraphicsServices;
 import dev.soakfield.app.OrbitCamera;
+import dev.soakfield.app.PictureMaker;
+import dev.soakfield.app.PngFile;
 import dev.soakfield.app.ResultSet;
 import dev.soakfield.app.Scene;
 import dev.soakfield.app.Study;
 import dev.soakfield.app.ViewSettings;
-import dev.soakfield.render.OffscreenPicture;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -101,6 +103,9 @@ final class RenderCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws IOException {
+    PictureMaker pictures =
+        GraphicsServices.pictures()
+            .orElseThrow(() -> new UserInputException("render: " + GraphicsServices.NO_WINDOW));
     int[] wh = size(size);
     Study study = Study.open(input);
     ViewSettings settings = settings(study);
@@ -113,12 +118,8 @@ final class RenderCommand implements Callable<Integer> {
     camera.viewport(wh[0], wh[1]);
     camera.fit(study.geometry().bounds());
     Scene scene = new Scene(study, settings);
-    BufferedImage img;
-    try (OffscreenPicture pic = new OffscreenPicture(wh[0], wh[1])) {
-      pic.renderer().unit(unit);
-      img = pic.render(scene, camera);
-    }
-    OffscreenPicture.writePng(img, out);
+    BufferedImage img = pictures.draw(scene, camera, wh[0], wh[1], unit);
+    PngFile.write(img, out);
     PrintWriter o = spec.commandLine().getOut();
     o.println("picture: " + out + " (" + wh[0] + "x" + wh[1] + ")");
     study

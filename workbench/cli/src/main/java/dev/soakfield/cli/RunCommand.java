@@ -7,12 +7,14 @@ import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunSummary;
 import dev.soakfield.fem.solve.SolverStalledException;
 import dev.soakfield.fem.time.RunFailedException;
+import dev.soakfield.report.FieldPictures;
 import dev.soakfield.report.ReportWriter;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -122,7 +124,11 @@ final class RunCommand implements Callable<Integer> {
       throw e;
     }
     progress.done();
-    FieldPictures.draw(s.outputFolder(), err);
+    Optional<String> noPictures = FieldPictures.draw(s.outputFolder());
+    if (noPictures.isPresent() && !quiet) {
+      err.println("note: the report has no field picture: " + noPictures.get());
+      err.flush();
+    }
     ReportWriter.write(s.outputFolder());
     if (!quiet) {
       report(spec.commandLine().getOut(), s);

@@ -15,7 +15,7 @@ import org.junit.jupiter.api.TestFactory;
 /** The broken-cases corpus of fem3d through the command line: exit 2, a message, no trace. */
 class BrokenCasesCliTest {
   static final Path CORPUS =
-      Path.of("..", "fem3d", "src", "test", "resources", "broken-cases")
+      Path.of("..", "..", "fem3d", "src", "test", "resources", "broken-cases")
           .toAbsolutePath()
           .normalize();
 

@@ -26,7 +26,7 @@ import org.junit.jupiter.api.Test;
  */
 class CaseSchemaTest {
   /** Tests run in the module folder; the schema and samples are in the repository. */
-  static final Path ROOT = Path.of("..").toAbsolutePath().normalize();
+  static final Path ROOT = Path.of("../..").toAbsolutePath().normalize();
 
   static Schema schema;
 

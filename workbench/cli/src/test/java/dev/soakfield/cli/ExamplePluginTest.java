@@ -30,7 +30,7 @@ class ExamplePluginTest {
       implements LawPoint {}
 
   private Path exampleJar(Path plugins) throws Exception {
-    Path project = Path.of("").toAbsolutePath().getParent().resolve("plugins/example-law");
+    Path project = Path.of("../..").toAbsolutePath().normalize().resolve("plugins/example-law");
     assertTrue(Files.isDirectory(project), "example project at " + project);
     return PluginJarBuilder.build(
         project.resolve("src/main/java"),

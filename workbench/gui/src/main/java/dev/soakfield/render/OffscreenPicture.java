@@ -1,12 +1,11 @@
 package dev.soakfield.render;
 
 import dev.soakfield.app.OrbitCamera;
+import dev.soakfield.app.PngFile;
 import dev.soakfield.app.Scene;
-import dev.soakfield.mesh.AtomicFiles;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Path;
-import javax.imageio.ImageIO;
 
 /** Renders scenes to pictures with no window: the engine of {@code soakfield render}. */
 public final class OffscreenPicture implements AutoCloseable {
@@ -35,13 +34,7 @@ public final class OffscreenPicture implements AutoCloseable {
 
   /** Writes a picture as PNG, replacing the file only when the new one is complete. */
   public static void writePng(BufferedImage img, Path file) throws IOException {
-    AtomicFiles.write(
-        file,
-        tmp -> {
-          if (!ImageIO.write(img, "png", tmp.toFile())) {
-            throw new IOException("no PNG writer in this Java runtime");
-          }
-        });
+    PngFile.write(img, file);
   }
 
   @Override
