@@ -5,8 +5,8 @@ import java.util.ServiceLoader;
 
 /**
  * Finds the window and the renderer on the class path. They sit in the gui module, which the
- * application jar carries and the headless jar leaves out; callers say {@link #NO_WINDOW} when one is
- * missing.
+ * application jar carries and the headless jar leaves out; callers say {@link #NO_WINDOW} when one
+ * is missing.
  */
 public final class GraphicsServices {
   /** What a command that needs the window or the renderer says in the headless build. */

@@ -8,8 +8,8 @@ import java.awt.image.BufferedImage;
  */
 public interface PictureMaker {
   /**
-   * The scene as {@code camera} sees it, {@code width} by {@code height} pixels, with the colour bar
-   * labelled in {@code unit}.
+   * The scene as {@code camera} sees it, {@code width} by {@code height} pixels, with the colour
+   * bar labelled in {@code unit}.
    */
   BufferedImage draw(Scene scene, OrbitCamera camera, int width, int height, String unit);
 }

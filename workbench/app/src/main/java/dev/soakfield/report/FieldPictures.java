@@ -44,7 +44,8 @@ public final class FieldPictures {
       Path folder = results.resolve(ReportWriter.PICTURES);
       Files.createDirectories(folder);
       draw(maker.get(), study, r.get(), Optional.empty(), folder.resolve("field-c-end.png"));
-      draw(maker.get(), study, r.get(), Optional.of(mid), folder.resolve("field-c-end-section.png"));
+      draw(
+          maker.get(), study, r.get(), Optional.of(mid), folder.resolve("field-c-end-section.png"));
       return Optional.empty();
     } catch (IOException | RuntimeException | LinkageError e) {
       return Optional.of(String.valueOf(e.getMessage()));

@@ -1,5 +1,6 @@
 package dev.soakfield.cli;
 
+import dev.soakfield.app.fit.FitInputException;
 import dev.soakfield.fem.casefile.CaseInputException;
 import dev.soakfield.fem.laws.PluginLoadException;
 import dev.soakfield.fem.laws.SourceLawException;
@@ -57,6 +58,7 @@ public final class ExitCodes {
   static int codeFor(Throwable ex) {
     if (ex instanceof MeshInputException
         || ex instanceof UserInputException
+        || ex instanceof FitInputException
         || ex instanceof CaseInputException
         || ex instanceof PluginLoadException
         || ex instanceof ResultFolderException

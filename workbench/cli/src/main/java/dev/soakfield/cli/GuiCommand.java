@@ -1,7 +1,7 @@
 package dev.soakfield.cli;
 
-import dev.soakfield.app.Study;
 import dev.soakfield.app.GraphicsServices;
+import dev.soakfield.app.Study;
 import dev.soakfield.app.WindowLauncher;
 import java.nio.file.Path;
 import java.util.Optional;

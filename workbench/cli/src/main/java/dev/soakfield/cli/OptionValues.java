@@ -20,4 +20,23 @@ final class OptionValues {
           option + ": found '" + text + "', expected " + e.expected() + " (SI: " + siUnit + ")");
     }
   }
+
+  /**
+   * Parses a value that must be positive and finite, e.g. a thickness.
+   *
+   * @throws UserInputException naming the option, what was found and what was expected
+   */
+  static double positive(String option, String text, String siUnit) {
+    double v;
+    try {
+      v = SiValue.parse(text, siUnit);
+    } catch (UnitException e) {
+      throw new UserInputException(option + ": found " + e.found() + ", expected " + e.expected());
+    }
+    if (!(v > 0) || Double.isInfinite(v)) {
+      throw new UserInputException(
+          option + ": found '" + text + "', expected a positive value in " + siUnit);
+    }
+    return v;
+  }
 }

@@ -120,8 +120,7 @@ class HeadlessCommandsTest {
     assertEquals(0, r.exitCode(), r.err());
     JsonNode j = new ObjectMapper().readTree(r.out());
     // Crank (1975), eq. 4.17, first term at the centre of the sheet: c/c0 = 4/π·exp(−Dπ²t/l²)
-    double expected =
-        -Math.log(0.1 * Math.PI / 4) / (Math.PI * Math.PI) * 1e-6 / diffusivity(400);
+    double expected = -Math.log(0.1 * Math.PI / 4) / (Math.PI * Math.PI) * 1e-6 / diffusivity(400);
     assertEquals(expected, j.get("bake_time").asDouble(), 0.01 * expected);
   }
 

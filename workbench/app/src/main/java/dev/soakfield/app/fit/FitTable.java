@@ -1,4 +1,4 @@
-package dev.soakfield.cli;
+package dev.soakfield.app.fit;
 
 import dev.soakfield.fem.units.SiValue;
 import dev.soakfield.fem.units.UnitException;
@@ -15,7 +15,7 @@ import java.util.function.DoubleUnaryOperator;
  * A two-column CSV of measurements for {@code soakfield fit}: a header such as {@code time [h],mass
  * [mg]} (units in brackets are optional; without them values are SI), then one row of two numbers
  * per measurement. Blank lines and lines starting with {@code #} are skipped. Every problem is a
- * {@link UserInputException} naming the file, the line, what was found and what was expected.
+ * {@link FitInputException} naming the file, the line, what was found and what was expected.
  */
 final class FitTable {
   final Path file;
@@ -59,10 +59,9 @@ final class FitTable {
     try {
       text = Files.readAllLines(file, StandardCharsets.UTF_8);
     } catch (java.nio.file.NoSuchFileException e) {
-      throw new UserInputException(file + ": no such file");
+      throw new FitInputException(file + ": no such file");
     } catch (IOException e) {
-      throw new UserInputException(
-          file + ": cannot be read as UTF-8 text (" + e.getMessage() + ")");
+      throw new FitInputException(file + ": cannot be read as UTF-8 text (" + e.getMessage() + ")");
     }
     int headerLine = -1;
     for (int i = 0; i < text.size(); i++) {
@@ -72,7 +71,7 @@ final class FitTable {
       }
     }
     if (headerLine < 0) {
-      throw new UserInputException(
+      throw new FitInputException(
           file
               + ": found no header, expected a line such as '"
               + first.names[0]
@@ -83,7 +82,7 @@ final class FitTable {
     String[] header = split(text.get(headerLine));
     int line = headerLine + 1;
     if (header.length != 2) {
-      throw new UserInputException(
+      throw new FitInputException(
           place(file, line)
               + "found "
               + header.length
@@ -96,7 +95,7 @@ final class FitTable {
     String[] c0 = nameAndUnit(header[0]);
     String[] c1 = nameAndUnit(header[1]);
     if (!matches(first, c0[0])) {
-      throw new UserInputException(
+      throw new FitInputException(
           place(file, line)
               + "found first column '"
               + header[0].strip()
@@ -115,7 +114,7 @@ final class FitTable {
       for (Column c : seconds) {
         names.append(names.length() == 0 ? "" : " or ").append(c.describe());
       }
-      throw new UserInputException(
+      throw new FitInputException(
           place(file, line) + "found second column '" + header[1].strip() + "', expected " + names);
     }
     DoubleUnaryOperator conv0 = converter(file, line, c0, first.siUnit);
@@ -129,7 +128,7 @@ final class FitTable {
       }
       String[] cells = split(row);
       if (cells.length != 2) {
-        throw new UserInputException(
+        throw new FitInputException(
             place(file, i + 1)
                 + "found "
                 + cells.length
@@ -159,7 +158,7 @@ final class FitTable {
   void requireIncreasingFirstColumn() {
     for (int i = 1; i < x.length; i++) {
       if (!(x[i] > x[i - 1])) {
-        throw new UserInputException(
+        throw new FitInputException(
             place(file, lines[i])
                 + "found "
                 + firstName
@@ -175,7 +174,7 @@ final class FitTable {
   /** Checks that there are at least {@code min} rows of data. */
   void requireRows(int min, String why) {
     if (x.length < min) {
-      throw new UserInputException(
+      throw new FitInputException(
           file + ": found " + x.length + " rows of data, expected at least " + min + " " + why);
     }
   }
@@ -222,7 +221,7 @@ final class FitTable {
     try {
       return SiValue.converterTo(col[1], siUnit);
     } catch (UnitException e) {
-      throw new UserInputException(
+      throw new FitInputException(
           place(file, line)
               + "column '"
               + col[0]
@@ -242,7 +241,7 @@ final class FitTable {
     } catch (NumberFormatException e) {
       // reported below with the place
     }
-    throw new UserInputException(
+    throw new FitInputException(
         place(file, line)
             + "found '"
             + cell
