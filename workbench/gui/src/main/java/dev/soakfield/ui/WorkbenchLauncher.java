@@ -14,6 +14,6 @@ public final class WorkbenchLauncher implements WindowLauncher {
 
   @Override
   public void open(Optional<Study> study) {
-    Workbench.run(study);
+    WorkbenchWindow.run(study);
   }
 }
