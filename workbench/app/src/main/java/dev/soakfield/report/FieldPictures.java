@@ -4,10 +4,9 @@ import dev.soakfield.app.FieldKind;
 import dev.soakfield.app.GraphicsServices;
 import dev.soakfield.app.OrbitCamera;
 import dev.soakfield.app.PictureMaker;
-import dev.soakfield.app.PngFile;
 import dev.soakfield.app.ResultSet;
-import dev.soakfield.app.Scene;
 import dev.soakfield.app.Study;
+import dev.soakfield.app.ViewPicture;
 import dev.soakfield.app.ViewSettings;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -63,11 +62,7 @@ public final class FieldPictures {
     settings.field(Optional.of(FieldKind.CONCENTRATION));
     settings.frame(results.frameCount() - 1);
     settings.section(section);
-    OrbitCamera camera = new OrbitCamera();
-    camera.look(OrbitCamera.View.ISO);
-    camera.viewport(WIDTH, HEIGHT);
-    camera.fit(study.geometry().bounds());
-    PngFile.write(
-        maker.draw(new Scene(study, settings), camera, WIDTH, HEIGHT, "case units"), file);
+    ViewPicture.write(
+        maker, study, settings, OrbitCamera.View.ISO, WIDTH, HEIGHT, "case units", file);
   }
 }

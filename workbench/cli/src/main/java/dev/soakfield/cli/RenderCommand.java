@@ -4,12 +4,11 @@ import dev.soakfield.app.FieldKind;
 import dev.soakfield.app.GraphicsServices;
 import dev.soakfield.app.OrbitCamera;
 import dev.soakfield.app.PictureMaker;
-import dev.soakfield.app.PngFile;
 import dev.soakfield.app.ResultSet;
 import dev.soakfield.app.Scene;
 import dev.soakfield.app.Study;
+import dev.soakfield.app.ViewPicture;
 import dev.soakfield.app.ViewSettings;
-import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -109,17 +108,13 @@ final class RenderCommand implements Callable<Integer> {
     int[] wh = size(size);
     Study study = Study.open(input);
     ViewSettings settings = settings(study);
-    OrbitCamera camera = new OrbitCamera();
+    OrbitCamera.View side;
     try {
-      camera.look(OrbitCamera.View.parse(view));
+      side = OrbitCamera.View.parse(view);
     } catch (IllegalArgumentException e) {
       throw new UserInputException("--view: " + e.getMessage());
     }
-    camera.viewport(wh[0], wh[1]);
-    camera.fit(study.geometry().bounds());
-    Scene scene = new Scene(study, settings);
-    BufferedImage img = pictures.draw(scene, camera, wh[0], wh[1], unit);
-    PngFile.write(img, out);
+    Scene scene = ViewPicture.write(pictures, study, settings, side, wh[0], wh[1], unit, out);
     PrintWriter o = spec.commandLine().getOut();
     o.println("picture: " + out + " (" + wh[0] + "x" + wh[1] + ")");
     study
