@@ -41,7 +41,7 @@ final class RenderBenchCommand implements Callable<Integer> {
     if (cells < 2 || cells > 120) {
       throw new UserInputException("--cells: found " + cells + ", expected 2 to 120");
     }
-    int[] wh = RenderCommand.size(size);
+    int[] wh = ViewOptions.size(size);
     bench.measure(spec.commandLine().getOut(), cells, wh[0], wh[1]);
     return ExitCodes.OK;
   }
