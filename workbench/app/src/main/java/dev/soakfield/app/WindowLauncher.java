@@ -1,0 +1,15 @@
+package dev.soakfield.app;
+
+import java.util.Optional;
+
+/**
+ * Opens the workbench window. The gui module provides it (found by {@link GraphicsServices}); the
+ * headless command line has none, so it never loads a windowing library.
+ */
+public interface WindowLauncher {
+  /** Why no window can be shown here (no display, say), or empty when one can. */
+  Optional<String> whyNoWindow();
+
+  /** Opens the window on {@code study} (a file dialog asks when empty) and returns when closed. */
+  void open(Optional<Study> study);
+}

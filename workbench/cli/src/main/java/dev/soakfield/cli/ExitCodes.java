@@ -1,0 +1,79 @@
+package dev.soakfield.cli;
+
+import dev.soakfield.app.fit.FitInputException;
+import dev.soakfield.fem.casefile.CaseInputException;
+import dev.soakfield.fem.laws.PluginLoadException;
+import dev.soakfield.fem.laws.SourceLawException;
+import dev.soakfield.fem.run.HeapTooSmallException;
+import dev.soakfield.fem.run.ResultFolderException;
+import dev.soakfield.fem.solve.SolverStalledException;
+import dev.soakfield.fem.time.RunFailedException;
+import dev.soakfield.mesh.MeshInputException;
+import java.io.PrintWriter;
+import picocli.CommandLine;
+
+/**
+ * The exit codes of every command, and the one place that turns exceptions into them: a user's
+ * mistake prints its message (no stack trace) and exits 2; a defect prints the trace and exits 1.
+ */
+public final class ExitCodes {
+  public static final int OK = 0;
+  public static final int INTERNAL_ERROR = 1;
+  public static final int BAD_INPUT = 2;
+  public static final int NUMERICAL_FAILURE = 3;
+
+  private ExitCodes() {}
+
+  /** Runs {@code command} with {@code args} and returns the exit code. */
+  public static int execute(Object command, String[] args) {
+    return configure(new CommandLine(command)).execute(args);
+  }
+
+  /** Applies the project's exit codes and error handling to {@code cl}. */
+  public static CommandLine configure(CommandLine cl) {
+    cl.setExitCodeExceptionMapper(ExitCodes::codeFor);
+    cl.setParameterExceptionHandler(
+        (ex, args) -> {
+          PrintWriter err = ex.getCommandLine().getErr();
+          err.println("soakfield: " + ex.getMessage());
+          err.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
+          return BAD_INPUT;
+        });
+    cl.setExecutionExceptionHandler(
+        (ex, cmd, parseResult) -> {
+          PrintWriter err = cmd.getErr();
+          int code = codeFor(ex);
+          if (code == INTERNAL_ERROR) {
+            err.println("soakfield: internal error, please report it with the trace below.");
+            ex.printStackTrace(err);
+          } else {
+            err.println("soakfield: " + ex.getMessage());
+          }
+          err.flush();
+          return code;
+        });
+    return cl;
+  }
+
+  static int codeFor(Throwable ex) {
+    if (ex instanceof MeshInputException
+        || ex instanceof UserInputException
+        || ex instanceof FitInputException
+        || ex instanceof CaseInputException
+        || ex instanceof PluginLoadException
+        || ex instanceof ResultFolderException
+        || ex instanceof HeapTooSmallException) {
+      return BAD_INPUT;
+    }
+    if (ex instanceof RunFailedException
+        || ex instanceof SolverStalledException
+        || ex instanceof SourceLawException) {
+      return NUMERICAL_FAILURE;
+    }
+    if (ex instanceof java.nio.file.NoSuchFileException
+        || ex instanceof java.nio.file.AccessDeniedException) {
+      return BAD_INPUT;
+    }
+    return INTERNAL_ERROR;
+  }
+}

@@ -1,0 +1,108 @@
+package dev.soakfield.ui;
+
+import static org.lwjgl.nuklear.Nuklear.*;
+
+import dev.soakfield.app.Annotations;
+import dev.soakfield.app.ProbeSelection;
+import dev.soakfield.app.Resample;
+import dev.soakfield.app.ResultSet;
+import dev.soakfield.app.SeriesTable;
+import dev.soakfield.app.WorkbenchModel;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import org.lwjgl.nuklear.NkContext;
+import org.lwjgl.system.MemoryStack;
+
+/**
+ * The "Uptake" panel on the right: what is under the cursor and was clicked, the amount per part
+ * against time, and the probe's curve through the frames.
+ */
+final class UptakePanel {
+  private final NkContext ctx;
+  private final WorkbenchModel model;
+
+  UptakePanel(NkContext ctx, WorkbenchModel model) {
+    this.ctx = ctx;
+    this.model = model;
+  }
+
+  void draw(MemoryStack stack) {
+    ProbeSelection probe = model.probe();
+    nk_layout_row_dynamic(ctx, 20, 1);
+    nk_label(ctx, probe.hover().isEmpty() ? "(point at the part)" : probe.hover(), NK_TEXT_LEFT);
+    probe.picked().ifPresent(p -> nk_label(ctx, "clicked: " + p, NK_TEXT_LEFT));
+    Optional<SeriesTable> series = model.study().results().flatMap(ResultSet::series);
+    if (series.isPresent() && series.get().rowCount() > 1 && series.get().has("time")) {
+      amounts(stack, series.get());
+    }
+    if (probe.probe().isPresent()) {
+      probe(stack, probe);
+    }
+  }
+
+  private void amounts(MemoryStack stack, SeriesTable s) {
+    double[] t = s.column("time");
+    nk_label(ctx, "Amount per part against time", NK_TEXT_LEFT);
+    nk_label(ctx, "0 .. " + Annotations.time(t[t.length - 1]), NK_TEXT_LEFT);
+    List<String> parts = s.suffixes("amount:");
+    List<double[]> curves = new ArrayList<>();
+    double max = 0;
+    for (String p : parts) {
+      double[] y = Resample.even(t, s.column("amount:" + p), 60);
+      curves.add(y);
+      for (double v : y) {
+        max = Math.max(max, v);
+      }
+    }
+    nk_layout_row_dynamic(ctx, 150, 1);
+    NkCharts.lines(ctx, stack, curves, 0, max > 0 ? max : 1);
+    nk_layout_row_dynamic(ctx, 18, 1);
+    for (int i = 0; i < parts.size(); i++) {
+      nk_label_colored(
+          ctx,
+          parts.get(i) + "  (max " + Annotations.number(max(curves.get(i))) + ")",
+          NK_TEXT_LEFT,
+          NkCharts.colour(stack, i));
+    }
+  }
+
+  private void probe(MemoryStack stack, ProbeSelection probe) {
+    double[] p = probe.probe().get().point();
+    nk_layout_row_dynamic(ctx, 20, 1);
+    nk_label(ctx, "Probe", NK_TEXT_LEFT);
+    nk_label(
+        ctx,
+        String.format(
+            Locale.ROOT,
+            "at %s, %s, %s",
+            Annotations.length(p[0]),
+            Annotations.length(p[1]),
+            Annotations.length(p[2])),
+        NK_TEXT_LEFT);
+    if (probe.curve().isPresent()) {
+      double[] v = probe.curve().get();
+      double lo = Double.POSITIVE_INFINITY;
+      double hi = Double.NEGATIVE_INFINITY;
+      for (double x : v) {
+        lo = Math.min(lo, x);
+        hi = Math.max(hi, x);
+      }
+      nk_label(
+          ctx,
+          "range " + Annotations.number(lo) + " .. " + Annotations.number(hi) + " over the frames",
+          NK_TEXT_LEFT);
+      nk_layout_row_dynamic(ctx, 120, 1);
+      NkCharts.lines(ctx, stack, List.of(v), Math.min(0, lo), hi > lo ? hi : lo + 1);
+    }
+  }
+
+  private static double max(double[] v) {
+    double m = Double.NEGATIVE_INFINITY;
+    for (double x : v) {
+      m = Math.max(m, x);
+    }
+    return m;
+  }
+}
