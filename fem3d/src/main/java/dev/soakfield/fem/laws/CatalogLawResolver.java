@@ -4,8 +4,8 @@ import dev.soakfield.fem.casefile.CaseInputException;
 import dev.soakfield.fem.casefile.SourceSpec;
 import dev.soakfield.fem.physics.LawUse;
 import dev.soakfield.fem.run.LawResolver;
-import dev.soakfield.fem.spi.LawParameters;
-import dev.soakfield.fem.spi.SourceLaw;
+import dev.soakfield.law.api.LawParameters;
+import dev.soakfield.law.api.SourceLaw;
 import java.util.ArrayList;
 import java.util.List;
 

@@ -1,10 +1,10 @@
 package dev.soakfield.fem.laws;
 
-import dev.soakfield.fem.spi.LawParameters;
-import dev.soakfield.fem.spi.LawPoint;
-import dev.soakfield.fem.spi.RateSink;
-import dev.soakfield.fem.spi.SourceLaw;
-import dev.soakfield.fem.spi.StateView;
+import dev.soakfield.law.api.LawParameters;
+import dev.soakfield.law.api.LawPoint;
+import dev.soakfield.law.api.RateSink;
+import dev.soakfield.law.api.SourceLaw;
+import dev.soakfield.law.api.StateView;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
@@ -140,15 +140,15 @@ public final class GuardedLaw {
   }
 
   /** The amount per m³ the state holds ({@code time}: when, for messages). */
-  public double heldAmount(StateView state, double temperature, double time) {
+  public double trappedAmount(StateView state, double temperature, double time) {
     double held;
     try {
-      held = law.heldAmount(state, temperature);
+      held = law.trappedAmount(state, temperature);
     } catch (RuntimeException | LinkageError e) {
-      throw fault(time, "heldAmount at T = " + temperature + " K " + threw(e), e);
+      throw fault(time, "trappedAmount at T = " + temperature + " K " + threw(e), e);
     }
     if (!Double.isFinite(held)) {
-      throw fault(time, "heldAmount gave " + held + ", expected a finite number", null);
+      throw fault(time, "trappedAmount gave " + held + ", expected a finite number", null);
     }
     return held;
   }

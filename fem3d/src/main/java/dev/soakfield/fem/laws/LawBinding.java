@@ -1,11 +1,12 @@
 package dev.soakfield.fem.laws;
 
 import dev.soakfield.fem.casefile.NameSuggestion;
-import dev.soakfield.fem.spi.LawParameter;
-import dev.soakfield.fem.spi.LawParameters;
-import dev.soakfield.fem.spi.SourceLawProvider;
 import dev.soakfield.fem.units.SiValue;
 import dev.soakfield.fem.units.UnitException;
+import dev.soakfield.law.api.LawParameter;
+import dev.soakfield.law.api.LawParameters;
+import dev.soakfield.law.api.ParameterBinder;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -23,7 +24,7 @@ import java.util.Optional;
  */
 public final class LawBinding {
   /** The key of a case's source object that names the law; never a parameter. */
-  public static final String LAW_KEY = "law";
+  public static final String LAW_KEY = ParameterBinder.LAW_KEY;
 
   private LawBinding() {}
 

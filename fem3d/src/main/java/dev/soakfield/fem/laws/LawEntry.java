@@ -1,6 +1,6 @@
 package dev.soakfield.fem.laws;
 
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.util.Objects;
 
 /**

@@ -1,6 +1,6 @@
 package dev.soakfield.fem.laws;
 
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStreamReader;

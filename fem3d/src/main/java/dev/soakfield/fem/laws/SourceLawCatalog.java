@@ -1,8 +1,8 @@
 package dev.soakfield.fem.laws;
 
 import dev.soakfield.fem.casefile.NameSuggestion;
-import dev.soakfield.fem.spi.LawParameter;
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.LawParameter;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.io.IOException;
 import java.lang.reflect.Modifier;
 import java.net.MalformedURLException;

@@ -1,6 +1,6 @@
 package dev.soakfield.fem.physics;
 
-import dev.soakfield.fem.spi.SourceLaw;
+import dev.soakfield.law.api.SourceLaw;
 import java.util.Objects;
 
 /**

@@ -5,9 +5,9 @@ import dev.soakfield.fem.assembly.SystemAssembler;
 import dev.soakfield.fem.physics.DiffusionModel;
 import dev.soakfield.fem.physics.LawUse;
 import dev.soakfield.fem.physics.MaterialBehaviour;
-import dev.soakfield.fem.spi.LawPoint;
-import dev.soakfield.fem.spi.RateSink;
-import dev.soakfield.fem.spi.StateView;
+import dev.soakfield.law.api.LawPoint;
+import dev.soakfield.law.api.RateSink;
+import dev.soakfield.law.api.StateView;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -265,7 +265,7 @@ final class LawSources {
       double sum = 0;
       for (int j = 0; j < p.nodes.length; j++) {
         probe.offset = j * p.stateCount;
-        sum += p.weights[j] * p.use.law().heldAmount(probe, kelvin);
+        sum += p.weights[j] * p.use.law().trappedAmount(probe, kelvin);
       }
       if (g >= 0) {
         out[g] += sum;
@@ -297,7 +297,7 @@ final class LawSources {
       probe.state = p.state;
       for (int j = 0; j < p.nodes.length; j++) {
         probe.offset = j * p.stateCount;
-        sum[p.nodes[j]] += p.weights[j] * p.use.law().heldAmount(probe, kelvin);
+        sum[p.nodes[j]] += p.weights[j] * p.use.law().trappedAmount(probe, kelvin);
       }
     }
     // weights of a node summed once per material, not once per law of that material

@@ -4,10 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.soakfield.fem.spi.LawParameter;
-import dev.soakfield.fem.spi.LawParameters;
-import dev.soakfield.fem.spi.SourceLaw;
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.LawParameter;
+import dev.soakfield.law.api.LawParameters;
+import dev.soakfield.law.api.SourceLaw;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;

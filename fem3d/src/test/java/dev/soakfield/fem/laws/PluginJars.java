@@ -1,6 +1,6 @@
 package dev.soakfield.fem.laws;
 
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.net.URISyntaxException;
@@ -63,7 +63,7 @@ final class PluginJars {
   static String provider(String pkg, String className, String id, String constructorBody) {
     return """
         package %s;
-        import dev.soakfield.fem.spi.*;
+        import dev.soakfield.law.api.*;
         import java.util.List;
         public final class %s implements SourceLawProvider {
           public %s() { %s }

@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;

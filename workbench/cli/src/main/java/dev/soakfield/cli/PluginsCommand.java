@@ -4,7 +4,7 @@ import dev.soakfield.fem.laws.LawBinding;
 import dev.soakfield.fem.laws.LawEntry;
 import dev.soakfield.fem.laws.PluginFolders;
 import dev.soakfield.fem.laws.SourceLawCatalog;
-import dev.soakfield.fem.spi.LawParameter;
+import dev.soakfield.law.api.LawParameter;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;

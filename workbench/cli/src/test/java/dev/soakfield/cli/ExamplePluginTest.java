@@ -11,7 +11,7 @@ import dev.soakfield.fem.laws.LawBinding;
 import dev.soakfield.fem.laws.LawEntry;
 import dev.soakfield.fem.laws.LawOrigin;
 import dev.soakfield.fem.laws.SourceLawCatalog;
-import dev.soakfield.fem.spi.LawPoint;
+import dev.soakfield.law.api.LawPoint;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -36,6 +36,56 @@ class ExamplePluginTest {
         project.resolve("src/main/java"),
         project.resolve("src/main/resources"),
         plugins.resolve("saturating-consumption-1.0.0.jar"));
+  }
+
+  @Test
+  void theExampleProjectDependsOnTheLawApiAloneOutsideItsTests() throws Exception {
+    Path pom = Path.of("../../plugins/example-law/pom.xml").toAbsolutePath().normalize();
+    var doc =
+        javax.xml.parsers.DocumentBuilderFactory.newInstance()
+            .newDocumentBuilder()
+            .parse(pom.toFile());
+    var deps = doc.getElementsByTagName("dependency");
+    List<String> shipped = new java.util.ArrayList<>();
+    for (int i = 0; i < deps.getLength(); i++) {
+      var d = (org.w3c.dom.Element) deps.item(i);
+      String scope = text(d, "scope");
+      if (!"test".equals(scope)) {
+        shipped.add(text(d, "groupId") + ":" + text(d, "artifactId") + ":" + scope);
+      }
+    }
+    assertEquals(List.of("dev.soakfield:law-api:provided"), shipped);
+  }
+
+  private static String text(org.w3c.dom.Element e, String tag) {
+    var nodes = e.getElementsByTagName(tag);
+    return nodes.getLength() == 0 ? "" : nodes.item(0).getTextContent().trim();
+  }
+
+  /** Negative control: a law that reaches past the law API into the solver does not compile. */
+  @Test
+  void aLawThatImportsTheSolverDoesNotCompileAgainstTheLawApi() throws Exception {
+    Path src = Files.createDirectories(dir.resolve("src/org/example/bad"));
+    Files.writeString(
+        src.resolve("ReachingLaw.java"),
+        """
+        package org.example.bad;
+
+        final class ReachingLaw {
+          static double parse(String text) {
+            return dev.soakfield.fem.units.SiValue.parse(text, "1/s");
+          }
+        }
+        """);
+    Path plugins = Files.createDirectories(dir.resolve("bad-plugins"));
+    IllegalStateException e =
+        org.junit.jupiter.api.Assertions.assertThrows(
+            IllegalStateException.class,
+            () ->
+                PluginJarBuilder.build(
+                    dir.resolve("src"), dir.resolve("none"), plugins.resolve("bad.jar")));
+    assertTrue(
+        e.getMessage().contains("package dev.soakfield.fem.units does not exist"), e.getMessage());
   }
 
   @Test

@@ -1,6 +1,6 @@
 package dev.soakfield.cli;
 
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.net.URISyntaxException;
@@ -16,8 +16,8 @@ import javax.tools.JavaCompiler;
 import javax.tools.ToolProvider;
 
 /**
- * Builds a plugin jar the way a plugin author's build does: compiles a source tree against fem3d
- * alone with the JDK's compiler and packs the classes with a resource tree (the service file).
+ * Builds a plugin jar the way a plugin author's build does: compiles a source tree against the law
+ * API alone with the JDK's compiler and packs the classes with a resource tree (the service file).
  */
 final class PluginJarBuilder {
   private PluginJarBuilder() {}
@@ -26,7 +26,7 @@ final class PluginJarBuilder {
   static Path build(Path sources, Path resources, Path jar) throws IOException {
     Path classes = Files.createTempDirectory(jar.getParent().getParent(), "classes");
     List<String> args =
-        new ArrayList<>(List.of("--release", "17", "-d", classes.toString(), "-cp", fem3d()));
+        new ArrayList<>(List.of("--release", "17", "-d", classes.toString(), "-cp", lawApi()));
     try (Stream<Path> files = Files.walk(sources)) {
       files
           .filter(f -> f.toString().endsWith(".java"))
@@ -34,8 +34,13 @@ final class PluginJarBuilder {
           .forEach(f -> args.add(f.toString()));
     }
     JavaCompiler javac = ToolProvider.getSystemJavaCompiler();
-    if (javac.run(null, null, null, args.toArray(String[]::new)) != 0) {
-      throw new IllegalStateException("plugin sources under " + sources + " do not compile");
+    java.io.ByteArrayOutputStream messages = new java.io.ByteArrayOutputStream();
+    if (javac.run(null, null, messages, args.toArray(String[]::new)) != 0) {
+      throw new IllegalStateException(
+          "plugin sources under "
+              + sources
+              + " do not compile:\n"
+              + messages.toString(StandardCharsets.UTF_8));
     }
     try (OutputStream out = Files.newOutputStream(jar);
         JarOutputStream jos = new JarOutputStream(out)) {
@@ -68,8 +73,8 @@ final class PluginJarBuilder {
     }
   }
 
-  /** Where fem3d's classes are: its jar or its target/classes. */
-  private static String fem3d() {
+  /** Where the law API's classes are: its jar or its target/classes (nothing of the solver). */
+  private static String lawApi() {
     try {
       return Path.of(
               SourceLawProvider.class.getProtectionDomain().getCodeSource().getLocation().toURI())

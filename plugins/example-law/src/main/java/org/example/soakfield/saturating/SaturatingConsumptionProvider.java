@@ -1,15 +1,15 @@
 package org.example.soakfield.saturating;
 
-import dev.soakfield.fem.spi.LawParameter;
-import dev.soakfield.fem.spi.LawParameters;
-import dev.soakfield.fem.spi.SourceLaw;
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.LawParameter;
+import dev.soakfield.law.api.LawParameters;
+import dev.soakfield.law.api.SourceLaw;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.util.List;
 
 /**
  * Declares the law: its id (what a case file names), a description, its parameters, and how to
  * make the law from checked values. Soakfield finds this class through the file
- * META-INF/services/dev.soakfield.fem.spi.SourceLawProvider, which names it.
+ * META-INF/services/dev.soakfield.law.api.SourceLawProvider, which names it.
  */
 public final class SaturatingConsumptionProvider implements SourceLawProvider {
   @Override

@@ -2,8 +2,8 @@ package org.example.soakfield.saturating;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import dev.soakfield.fem.spi.SourceLaw;
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.SourceLaw;
+import dev.soakfield.law.api.SourceLawProvider;
 import dev.soakfield.law.testkit.SourceLawContract;
 import dev.soakfield.law.testkit.WellMixedCell;
 import java.util.List;

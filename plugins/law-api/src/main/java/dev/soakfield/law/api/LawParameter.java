@@ -1,4 +1,4 @@
-package dev.soakfield.fem.spi;
+package dev.soakfield.law.api;
 
 import java.util.Objects;
 

@@ -1,4 +1,4 @@
-package dev.soakfield.fem.spi;
+package dev.soakfield.law.api;
 
 /** Checked parameter values of one law instance, in the SI units their declarations name. */
 public interface LawParameters {

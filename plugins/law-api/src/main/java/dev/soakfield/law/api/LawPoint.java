@@ -1,4 +1,4 @@
-package dev.soakfield.fem.spi;
+package dev.soakfield.law.api;
 
 /**
  * Where and when a law is evaluated: one node of one material at the end of a time step. The solver

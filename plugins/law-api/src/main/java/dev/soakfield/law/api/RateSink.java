@@ -1,4 +1,4 @@
-package dev.soakfield.fem.spi;
+package dev.soakfield.law.api;
 
 /** Receives a law's answer at one point. */
 public interface RateSink {

@@ -1,4 +1,4 @@
-package dev.soakfield.fem.spi;
+package dev.soakfield.law.api;
 
 import java.util.List;
 
@@ -38,7 +38,7 @@ public interface SourceLaw {
    * Amount per m³ that the state holds apart from the mobile concentration (trapped hydrogen, bound
    * water), for the balance and the outputs; 0 for laws that only create or consume.
    */
-  default double heldAmount(StateView state, double temperature) {
+  default double trappedAmount(StateView state, double temperature) {
     return 0.0;
   }
 }

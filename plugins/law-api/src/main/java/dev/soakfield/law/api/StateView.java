@@ -1,4 +1,4 @@
-package dev.soakfield.fem.spi;
+package dev.soakfield.law.api;
 
 /** Read-only view of a law's internal state variables at one node. */
 public interface StateView {

@@ -1,9 +1,9 @@
 package dev.soakfield.law.consumption;
 
-import dev.soakfield.fem.spi.LawPoint;
-import dev.soakfield.fem.spi.RateSink;
-import dev.soakfield.fem.spi.SourceLaw;
-import dev.soakfield.fem.spi.StateView;
+import dev.soakfield.law.api.LawPoint;
+import dev.soakfield.law.api.RateSink;
+import dev.soakfield.law.api.SourceLaw;
+import dev.soakfield.law.api.StateView;
 import java.util.List;
 
 /** π = −k0·exp(−Ea/(R·T))·c; stateless, so it is linear in c and its Jacobian is −k. */

@@ -1,9 +1,9 @@
 package dev.soakfield.law.consumption;
 
-import dev.soakfield.fem.spi.LawParameter;
-import dev.soakfield.fem.spi.LawParameters;
-import dev.soakfield.fem.spi.SourceLaw;
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.LawParameter;
+import dev.soakfield.law.api.LawParameters;
+import dev.soakfield.law.api.SourceLaw;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.util.List;
 
 /**

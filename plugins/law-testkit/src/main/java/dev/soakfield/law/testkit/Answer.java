@@ -1,8 +1,8 @@
 package dev.soakfield.law.testkit;
 
-import dev.soakfield.fem.spi.LawPoint;
-import dev.soakfield.fem.spi.SourceLaw;
-import dev.soakfield.fem.spi.StateView;
+import dev.soakfield.law.api.LawPoint;
+import dev.soakfield.law.api.SourceLaw;
+import dev.soakfield.law.api.StateView;
 
 /**
  * One answer of {@link SourceLaw#rate}: π and ∂π/∂c.

@@ -1,6 +1,6 @@
 package dev.soakfield.law.testkit;
 
-import dev.soakfield.fem.spi.LawPoint;
+import dev.soakfield.law.api.LawPoint;
 
 /**
  * A point where a test evaluates a law.

@@ -5,12 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
-import dev.soakfield.fem.laws.LawBinding;
-import dev.soakfield.fem.spi.LawParameter;
-import dev.soakfield.fem.spi.SourceLaw;
-import dev.soakfield.fem.spi.SourceLawProvider;
-import dev.soakfield.fem.units.SiValue;
-import dev.soakfield.fem.units.UnitException;
+import dev.soakfield.law.api.LawParameter;
+import dev.soakfield.law.api.ParameterBinder;
+import dev.soakfield.law.api.SourceLaw;
+import dev.soakfield.law.api.SourceLawProvider;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
@@ -68,7 +66,7 @@ public abstract class SourceLawContract {
 
   /** The law made from {@link #parameters()}, failing the test with the binding's problems. */
   protected final SourceLaw law() {
-    LawBinding.Result r = LawBinding.bind(provider(), parameters());
+    ParameterBinder.Binding r = ParameterBinder.find().bind(provider(), parameters());
     if (!r.problems().isEmpty()) {
       fail("parameters() do not bind: " + r.problems());
     }
@@ -98,12 +96,13 @@ public abstract class SourceLawContract {
   @Test
   public void declarationsAreSane() {
     SourceLawProvider p = provider();
+    ParameterBinder binder = ParameterBinder.find();
     assertTrue(p.id().matches("[a-z0-9]+(-[a-z0-9]+)*"), "id '" + p.id() + "'");
     assertFalse(p.description().isBlank(), "description");
     Set<String> names = new HashSet<>();
     for (LawParameter d : p.parameters()) {
       assertTrue(names.add(d.name()), "parameter '" + d.name() + "' declared twice");
-      assertFalse(d.name().equals(LawBinding.LAW_KEY), "'law' is the key naming the law");
+      assertFalse(d.name().equals(ParameterBinder.LAW_KEY), "'law' is the key naming the law");
       assertTrue(d.name().matches("[a-z0-9]+(-[a-z0-9]+)*"), "parameter name '" + d.name() + "'");
       assertFalse(d.description().isBlank(), d.name() + ": description");
       assertFalse(d.unit().isBlank(), d.name() + ": unit (\"1\" for a pure number)");
@@ -115,13 +114,13 @@ public abstract class SourceLawContract {
       }
       if (Double.isFinite(probe)) {
         try {
-          assertEquals(probe, SiValue.parse(Double.toString(probe), d.unit()), d.name());
-        } catch (UnitException e) {
+          assertEquals(probe, binder.inUnit(Double.toString(probe), d.unit()), d.name());
+        } catch (IllegalArgumentException e) {
           fail(d.name() + ": unit '" + d.unit() + "' does not parse: " + e.getMessage());
         }
       }
     }
-    assertTrue(LawBinding.bind(p, parameters()).problems().isEmpty(), "parameters() bind");
+    assertTrue(binder.bind(p, parameters()).problems().isEmpty(), "parameters() bind");
   }
 
   @Test
@@ -161,8 +160,8 @@ public abstract class SourceLawContract {
       Answer a = Answer.of(law, at(s, s.concentration()), start);
       double[] end = new double[law.stateNames().size()];
       law.advance(at(s, s.concentration()), start, end);
-      double held0 = law.heldAmount(start, s.temperature());
-      double held1 = law.heldAmount(new State(end), s.temperature());
+      double held0 = law.trappedAmount(start, s.temperature());
+      double held1 = law.trappedAmount(new State(end), s.temperature());
       if (law.stateNames().isEmpty()) {
         assertEquals(0.0, held1, "a stateless law holds nothing");
         continue;
@@ -187,7 +186,7 @@ public abstract class SourceLawContract {
         double[] end = new double[state.length];
         law.advance(at(s, 0), start, end);
         assertAllFinite(end, "advance to c = 0 at " + s);
-        assertTrue(Double.isFinite(law.heldAmount(new State(end), s.temperature())), "held");
+        assertTrue(Double.isFinite(law.trappedAmount(new State(end), s.temperature())), "held");
       }
     }
   }

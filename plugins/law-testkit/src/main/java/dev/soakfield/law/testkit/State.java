@@ -1,6 +1,6 @@
 package dev.soakfield.law.testkit;
 
-import dev.soakfield.fem.spi.StateView;
+import dev.soakfield.law.api.StateView;
 
 /** A law's state at one node, held in an array the test owns. */
 public final class State implements StateView {

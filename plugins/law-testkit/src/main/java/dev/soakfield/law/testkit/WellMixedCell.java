@@ -1,6 +1,6 @@
 package dev.soakfield.law.testkit;
 
-import dev.soakfield.fem.spi.SourceLaw;
+import dev.soakfield.law.api.SourceLaw;
 import java.util.function.DoubleUnaryOperator;
 
 /**
@@ -120,7 +120,7 @@ public final class WellMixedCell {
 
   /** The law's held amount for the current state. */
   public double held() {
-    return law.heldAmount(new State(state), temperatureAt.applyAsDouble(time));
+    return law.trappedAmount(new State(state), temperatureAt.applyAsDouble(time));
   }
 
   public double time() {

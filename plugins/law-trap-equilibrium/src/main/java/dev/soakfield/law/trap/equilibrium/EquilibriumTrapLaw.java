@@ -1,9 +1,9 @@
 package dev.soakfield.law.trap.equilibrium;
 
-import dev.soakfield.fem.spi.LawPoint;
-import dev.soakfield.fem.spi.RateSink;
-import dev.soakfield.fem.spi.SourceLaw;
-import dev.soakfield.fem.spi.StateView;
+import dev.soakfield.law.api.LawPoint;
+import dev.soakfield.law.api.RateSink;
+import dev.soakfield.law.api.SourceLaw;
+import dev.soakfield.law.api.StateView;
 import java.util.List;
 
 /**
@@ -72,7 +72,7 @@ final class EquilibriumTrapLaw implements SourceLaw {
   }
 
   @Override
-  public double heldAmount(StateView state, double temperature) {
+  public double trappedAmount(StateView state, double temperature) {
     return state.get(0);
   }
 }

@@ -1,6 +1,6 @@
 package dev.soakfield.law.trap.equilibrium;
 
-import dev.soakfield.fem.spi.SourceLawProvider;
+import dev.soakfield.law.api.SourceLawProvider;
 import dev.soakfield.law.testkit.SourceLawContract;
 import java.util.List;
 import java.util.Map;

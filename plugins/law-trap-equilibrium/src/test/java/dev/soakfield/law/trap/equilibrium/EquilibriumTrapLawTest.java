@@ -3,7 +3,7 @@ package dev.soakfield.law.trap.equilibrium;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.soakfield.fem.laws.LawBinding;
+import dev.soakfield.law.api.ParameterBinder;
 import dev.soakfield.law.testkit.Answer;
 import dev.soakfield.law.testkit.At;
 import dev.soakfield.law.testkit.State;
@@ -18,10 +18,11 @@ class EquilibriumTrapLawTest {
   static final double TEN_TO_23 = Double.parseDouble("1e23");
 
   private static EquilibriumTrapLaw law(String nT, String nL, String eb) {
-    LawBinding.Result r =
-        LawBinding.bind(
-            new EquilibriumTrapProvider(),
-            Map.of("trap-density", nT, "lattice-density", nL, "binding-energy", eb));
+    ParameterBinder.Binding r =
+        ParameterBinder.find()
+            .bind(
+                new EquilibriumTrapProvider(),
+                Map.of("trap-density", nT, "lattice-density", nL, "binding-energy", eb));
     return (EquilibriumTrapLaw) new EquilibriumTrapProvider().create(r.parameters().orElseThrow());
   }
 
@@ -53,7 +54,7 @@ class EquilibriumTrapLawTest {
     law.initialState(c, 330, s);
     double theta = s[0] / 2.5e23;
     assertEquals(c / 5.1e29 * Math.exp(4.5e4 / (R * 330)), theta / (1 - theta), 1e-9);
-    assertEquals(s[0], law.heldAmount(new State(s), 330));
+    assertEquals(s[0], law.trappedAmount(new State(s), 330));
     // far above N_L·exp(−Eb/(R·T)) the traps are full
     law.initialState(1e28, 330, s);
     double x = 1e28 / 5.1e29 * Math.exp(4.5e4 / (R * 330));

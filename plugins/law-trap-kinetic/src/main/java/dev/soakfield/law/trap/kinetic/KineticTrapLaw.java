@@ -1,9 +1,9 @@
 package dev.soakfield.law.trap.kinetic;
 
-import dev.soakfield.fem.spi.LawPoint;
-import dev.soakfield.fem.spi.RateSink;
-import dev.soakfield.fem.spi.SourceLaw;
-import dev.soakfield.fem.spi.StateView;
+import dev.soakfield.law.api.LawPoint;
+import dev.soakfield.law.api.RateSink;
+import dev.soakfield.law.api.SourceLaw;
+import dev.soakfield.law.api.StateView;
 import java.util.List;
 
 /**
@@ -75,7 +75,7 @@ final class KineticTrapLaw implements SourceLaw {
   }
 
   @Override
-  public double heldAmount(StateView state, double temperature) {
+  public double trappedAmount(StateView state, double temperature) {
     return trapDensity * state.get(0);
   }
 }

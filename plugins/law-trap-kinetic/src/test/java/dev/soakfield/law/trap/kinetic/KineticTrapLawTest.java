@@ -107,7 +107,7 @@ class KineticTrapLawTest {
     double[] full = new double[1];
     law.initialState(1e12, 300, full);
     assertTrue(full[0] <= 1 && full[0] > 0.999, "θ " + full[0]);
-    assertEquals(3.0 * full[0], law.heldAmount(new State(full), 300), 1e-15);
+    assertEquals(3.0 * full[0], law.trappedAmount(new State(full), 300), 1e-15);
   }
 
   @Test
