@@ -1,7 +1,7 @@
 package dev.soakfield.fem.casefile;
 
 import dev.soakfield.fem.physics.ExposureHistory;
-import dev.soakfield.fem.physics.Law;
+import dev.soakfield.fem.physics.SorptionLaw;
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -77,10 +77,10 @@ final class CaseBinder {
         CaseFields.optional(obj, "initial")
             .map(n -> initial(n, materials))
             .orElse(Optional.of(InitialSpec.uniform(0)));
-    Optional<Law> law =
+    Optional<SorptionLaw> law =
         CaseFields.optional(obj, "law")
-            .map(n -> fields.word(n, "law", Law.values(), Law::word))
-            .orElse(Optional.of(Law.PLAIN));
+            .map(n -> fields.word(n, "law", SorptionLaw.values(), SorptionLaw::word))
+            .orElse(Optional.of(SorptionLaw.PLAIN));
     double temperature = Double.NaN;
     boolean temperatureOk = true;
     Optional<CaseNode> tNode = CaseFields.optional(obj, "temperature");

@@ -1,8 +1,7 @@
 package dev.soakfield.fem.casefile;
 
-import dev.soakfield.fem.physics.DiffusionModel;
 import dev.soakfield.fem.physics.ExposureHistory;
-import dev.soakfield.fem.physics.Law;
+import dev.soakfield.fem.physics.SorptionLaw;
 import dev.soakfield.fem.physics.TimeFunction;
 import java.nio.file.Path;
 import java.util.Collections;
@@ -42,7 +41,7 @@ public record CaseSpec(
     List<ProbeSpec> probes,
     OptionalDouble threshold,
     Map<String, SourcePlace> places,
-    Law law,
+    SorptionLaw law,
     double temperature,
     Optional<ExposureHistory> exposure) {
   public CaseSpec {
@@ -66,7 +65,7 @@ public record CaseSpec(
       return exposure.get().temperatureFunction();
     }
     return TimeFunction.constant(
-        Double.isNaN(temperature) ? DiffusionModel.ROOM_TEMPERATURE : temperature);
+        Double.isNaN(temperature) ? ExposureHistory.ROOM_TEMPERATURE : temperature);
   }
 
   private static <V> Map<String, V> ordered(Map<String, V> map) {

@@ -2,7 +2,7 @@ package dev.soakfield.fem.casefile;
 
 import dev.soakfield.fem.physics.ExposureHistory;
 import dev.soakfield.fem.physics.FaceKind;
-import dev.soakfield.fem.physics.Law;
+import dev.soakfield.fem.physics.SorptionLaw;
 import dev.soakfield.fem.physics.WaterVapour;
 import java.util.List;
 
@@ -31,7 +31,7 @@ final class EnvironmentChecks {
       if (f.kind() == FaceKind.EXCHANGE) {
         path = CasePaths.child(CasePaths.child("faces", f.faceGroup()), "value");
       }
-      if (spec.law() == Law.PLAIN) {
+      if (spec.law() == SorptionLaw.PLAIN) {
         add(
             spec,
             problems,
@@ -47,7 +47,7 @@ final class EnvironmentChecks {
             path,
             "found the ambient environment but no \"exposure\", expected an exposure history"
                 + " giving "
-                + (spec.law() == Law.HENRY ? "humidity" : "pressure"));
+                + (spec.law() == SorptionLaw.HENRY ? "humidity" : "pressure"));
         continue;
       }
       checkHistory(spec, spec.exposure().get(), problems);
@@ -83,7 +83,7 @@ final class EnvironmentChecks {
     for (int i = 0; i < segments.size(); i++) {
       ExposureHistory.Segment s = segments.get(i);
       String path = CasePaths.item("exposure", Math.min(i, segments.size() - 1));
-      if (spec.law() == Law.HENRY) {
+      if (spec.law() == SorptionLaw.HENRY) {
         if (Double.isNaN(s.humidityStart()) || Double.isNaN(s.humidityEnd())) {
           add(
               spec,

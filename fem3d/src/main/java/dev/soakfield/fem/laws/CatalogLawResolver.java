@@ -2,8 +2,8 @@ package dev.soakfield.fem.laws;
 
 import dev.soakfield.fem.casefile.CaseInputException;
 import dev.soakfield.fem.casefile.SourceSpec;
-import dev.soakfield.fem.physics.LawUse;
-import dev.soakfield.fem.run.LawResolver;
+import dev.soakfield.fem.model.LawResolver;
+import dev.soakfield.fem.model.LawUse;
 import dev.soakfield.law.api.LawParameters;
 import dev.soakfield.law.api.SourceLaw;
 import java.util.ArrayList;

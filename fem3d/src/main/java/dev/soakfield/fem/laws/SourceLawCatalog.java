@@ -118,7 +118,7 @@ public final class SourceLawCatalog {
    * parameters that do not fit are {@link dev.soakfield.fem.casefile.CaseInputException}s at the
    * source's place.
    */
-  public dev.soakfield.fem.run.LawResolver resolver() {
+  public dev.soakfield.fem.model.LawResolver resolver() {
     return new CatalogLawResolver(this);
   }
 

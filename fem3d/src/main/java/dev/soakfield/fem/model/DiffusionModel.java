@@ -1,6 +1,9 @@
-package dev.soakfield.fem.physics;
+package dev.soakfield.fem.model;
 
 import dev.soakfield.fem.assembly.FeSpace;
+import dev.soakfield.fem.physics.ExposureHistory;
+import dev.soakfield.fem.physics.SorptionLaw;
+import dev.soakfield.fem.physics.TimeFunction;
 import java.util.List;
 import java.util.Objects;
 
@@ -20,7 +23,7 @@ public final class DiffusionModel {
   private final int[] tetMaterial;
   private final List<MaterialBehaviour> materials;
   private final TimeFunction temperature;
-  private final Law law;
+  private final SorptionLaw law;
 
   /**
    * @param space the unknowns
@@ -50,7 +53,7 @@ public final class DiffusionModel {
         new int[space.mesh().tetCount()],
         List.of(MaterialBehaviour.constant("all")),
         TimeFunction.constant(ROOM_TEMPERATURE),
-        Law.PLAIN);
+        SorptionLaw.PLAIN);
   }
 
   /**
@@ -75,7 +78,7 @@ public final class DiffusionModel {
       int[] tetMaterial,
       List<MaterialBehaviour> materials,
       TimeFunction temperature,
-      Law law) {
+      SorptionLaw law) {
     this.space = Objects.requireNonNull(space, "space");
     int tets = space.mesh().tetCount();
     this.solubility = check(solubility, tets, "solubility");
@@ -99,8 +102,10 @@ public final class DiffusionModel {
     this.law = Objects.requireNonNull(law, "law");
   }
 
-  /** 20 °C, the temperature of a model that names none (common practice for "room temperature"). */
-  public static final double ROOM_TEMPERATURE = 293.15;
+  /**
+   * 20 °C, the temperature of a model that names none: {@link ExposureHistory#ROOM_TEMPERATURE}.
+   */
+  public static final double ROOM_TEMPERATURE = ExposureHistory.ROOM_TEMPERATURE;
 
   private static double[] check(double[] a, int length, String what) {
     if (a.length != length) {
@@ -160,7 +165,7 @@ public final class DiffusionModel {
     return temperature.at(0);
   }
 
-  public Law law() {
+  public SorptionLaw law() {
     return law;
   }
 

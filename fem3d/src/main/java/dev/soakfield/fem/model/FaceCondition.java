@@ -1,5 +1,7 @@
-package dev.soakfield.fem.physics;
+package dev.soakfield.fem.model;
 
+import dev.soakfield.fem.physics.FaceKind;
+import dev.soakfield.fem.physics.TimeFunction;
 import java.util.Objects;
 
 /** The condition on one face group, with the faces it covers and the solubility next to each. */

@@ -1,8 +1,7 @@
-package dev.soakfield.fem.run;
+package dev.soakfield.fem.model;
 
 import dev.soakfield.fem.casefile.CaseInputException;
 import dev.soakfield.fem.casefile.SourceSpec;
-import dev.soakfield.fem.physics.LawUse;
 
 /** Turns a case's {@code "source": {"law": ...}} into a law instance for one material. */
 @FunctionalInterface

@@ -1,4 +1,4 @@
-package dev.soakfield.fem.physics;
+package dev.soakfield.fem.model;
 
 import dev.soakfield.law.api.SourceLaw;
 import java.util.Objects;

@@ -1,5 +1,6 @@
-package dev.soakfield.fem.physics;
+package dev.soakfield.fem.model;
 
+import dev.soakfield.fem.physics.Arrhenius;
 import java.util.List;
 import java.util.Objects;
 

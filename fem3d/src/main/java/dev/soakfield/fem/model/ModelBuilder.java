@@ -1,4 +1,4 @@
-package dev.soakfield.fem.run;
+package dev.soakfield.fem.model;
 
 import dev.soakfield.fem.assembly.FeSpace;
 import dev.soakfield.fem.casefile.CaseInputException;
@@ -9,14 +9,9 @@ import dev.soakfield.fem.casefile.SourcePlace;
 import dev.soakfield.fem.casefile.SourceSpec;
 import dev.soakfield.fem.physics.AmbientPotential;
 import dev.soakfield.fem.physics.Arrhenius;
-import dev.soakfield.fem.physics.DiffusionModel;
-import dev.soakfield.fem.physics.FaceCondition;
-import dev.soakfield.fem.physics.FaceGroupMembers;
 import dev.soakfield.fem.physics.FaceKind;
-import dev.soakfield.fem.physics.FaceOwners;
-import dev.soakfield.fem.physics.LawUse;
-import dev.soakfield.fem.physics.MaterialBehaviour;
 import dev.soakfield.fem.physics.TimeFunction;
+import dev.soakfield.fem.results.StateFile;
 import dev.soakfield.mesh.TetMesh;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -88,7 +83,7 @@ public final class ModelBuilder {
       }
     }
     Optional<TimeFunction> ambient =
-        spec.exposure().isPresent() && spec.law() != dev.soakfield.fem.physics.Law.PLAIN
+        spec.exposure().isPresent() && spec.law() != dev.soakfield.fem.physics.SorptionLaw.PLAIN
             ? Optional.of(AmbientPotential.of(spec.law(), spec.exposure().get()))
             : Optional.empty();
     int[] owner = FaceOwners.of(mesh);

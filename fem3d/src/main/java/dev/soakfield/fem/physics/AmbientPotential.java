@@ -13,7 +13,7 @@ public final class AmbientPotential {
    *
    * @throws IllegalArgumentException for the plain law, which has no environment potential
    */
-  public static TimeFunction of(Law law, ExposureHistory history) {
+  public static TimeFunction of(SorptionLaw law, ExposureHistory history) {
     return switch (law) {
       case HENRY ->
           history.function(

@@ -12,6 +12,9 @@ import java.util.TreeSet;
  * segment; at t ≤ 0 they are the first segment's starting values.
  */
 public final class ExposureHistory {
+  /** 20 °C, the temperature of a case that names none (common practice for "room temperature"). */
+  public static final double ROOM_TEMPERATURE = 293.15;
+
   /**
    * One stretch of the history with values varying linearly from its start to its end. Humidity or
    * pressure is NaN where the segment does not give it.

@@ -4,7 +4,7 @@ package dev.soakfield.fem.physics;
  * How the potential φ, continuous across interfaces, relates to the concentration c = S·φ and to
  * the environment. One law per case.
  */
-public enum Law {
+public enum SorptionLaw {
   /** φ is a concentration; S is a partition coefficient (1 for a single material). */
   PLAIN("plain"),
   /** Water vapour in polymers: φ is the vapour partial pressure in Pa, c = S·p (Henry's law). */
@@ -14,7 +14,7 @@ public enum Law {
 
   private final String word;
 
-  Law(String word) {
+  SorptionLaw(String word) {
     this.word = word;
   }
 

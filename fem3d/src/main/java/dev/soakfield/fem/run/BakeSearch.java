@@ -5,8 +5,9 @@ import dev.soakfield.fem.casefile.StepControl;
 import dev.soakfield.fem.casefile.StopSpec;
 import dev.soakfield.fem.casefile.TimeScheme;
 import dev.soakfield.fem.casefile.TimeSpec;
+import dev.soakfield.fem.model.LawResolver;
 import dev.soakfield.fem.physics.ExposureHistory;
-import dev.soakfield.fem.physics.Law;
+import dev.soakfield.fem.physics.SorptionLaw;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -158,8 +159,8 @@ public final class BakeSearch {
   static RunPipeline.Prepared withBake(
       RunPipeline.Prepared base, Oven oven, double duration, Optional<StopSpec> stop) {
     CaseSpec spec = base.spec();
-    boolean henry = spec.law() == Law.HENRY;
-    boolean sieverts = spec.law() == Law.SIEVERTS;
+    boolean henry = spec.law() == SorptionLaw.HENRY;
+    boolean sieverts = spec.law() == SorptionLaw.SIEVERTS;
     ExposureHistory oneSegment =
         new ExposureHistory(
             List.of(

@@ -1,9 +1,9 @@
 package dev.soakfield.fem.run;
 
 import dev.soakfield.fem.assembly.FeSpace;
-import dev.soakfield.fem.physics.DiffusionModel;
-import dev.soakfield.fem.physics.FaceCondition;
-import dev.soakfield.fem.physics.FaceGroupMembers;
+import dev.soakfield.fem.model.DiffusionModel;
+import dev.soakfield.fem.model.FaceCondition;
+import dev.soakfield.fem.model.FaceGroupMembers;
 import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.physics.TimeFunction;
 import dev.soakfield.fem.time.StepListener;

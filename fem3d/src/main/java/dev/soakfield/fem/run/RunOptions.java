@@ -1,5 +1,6 @@
 package dev.soakfield.fem.run;
 
+import dev.soakfield.fem.model.LawResolver;
 import java.util.Objects;
 
 /**

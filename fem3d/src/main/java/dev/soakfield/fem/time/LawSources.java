@@ -2,9 +2,9 @@ package dev.soakfield.fem.time;
 
 import dev.soakfield.fem.assembly.CsrMatrix;
 import dev.soakfield.fem.assembly.SystemAssembler;
-import dev.soakfield.fem.physics.DiffusionModel;
-import dev.soakfield.fem.physics.LawUse;
-import dev.soakfield.fem.physics.MaterialBehaviour;
+import dev.soakfield.fem.model.DiffusionModel;
+import dev.soakfield.fem.model.LawUse;
+import dev.soakfield.fem.model.MaterialBehaviour;
 import dev.soakfield.law.api.LawPoint;
 import dev.soakfield.law.api.RateSink;
 import dev.soakfield.law.api.StateView;

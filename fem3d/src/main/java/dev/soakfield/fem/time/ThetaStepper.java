@@ -2,10 +2,10 @@ package dev.soakfield.fem.time;
 
 import dev.soakfield.fem.assembly.CsrMatrix;
 import dev.soakfield.fem.assembly.SystemAssembler;
-import dev.soakfield.fem.physics.DiffusionModel;
-import dev.soakfield.fem.physics.FaceCondition;
+import dev.soakfield.fem.model.DiffusionModel;
+import dev.soakfield.fem.model.FaceCondition;
+import dev.soakfield.fem.model.FaceOwners;
 import dev.soakfield.fem.physics.FaceKind;
-import dev.soakfield.fem.physics.FaceOwners;
 import dev.soakfield.fem.solve.PcgSolver;
 import dev.soakfield.fem.solve.PreconditionerKind;
 import dev.soakfield.fem.solve.SolverStalledException;

@@ -1,6 +1,6 @@
 package dev.soakfield.fem.verify;
 
-import dev.soakfield.fem.physics.DiffusionModel;
+import dev.soakfield.fem.model.DiffusionModel;
 import dev.soakfield.fem.time.ThetaStepper;
 import dev.soakfield.fem.time.TimeSettings;
 import dev.soakfield.fem.time.TransientRun;

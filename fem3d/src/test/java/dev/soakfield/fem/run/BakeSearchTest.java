@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.soakfield.fem.model.LawResolver;
 import dev.soakfield.fem.physics.Arrhenius;
 import dev.soakfield.mesh.gen.StructuredMesher;
 import dev.soakfield.mesh.msh.MshWriter;

@@ -7,6 +7,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.soakfield.fem.physics.HydrogenFugacity;
 import dev.soakfield.fem.physics.WaterVapour;
+import dev.soakfield.fem.results.StateFile;
 import dev.soakfield.mesh.gen.StructuredMesher;
 import dev.soakfield.mesh.msh.MshWriter;
 import java.io.IOException;

@@ -5,10 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.soakfield.fem.assembly.FeSpace;
-import dev.soakfield.fem.physics.DiffusionModel;
-import dev.soakfield.fem.physics.Law;
-import dev.soakfield.fem.physics.LawUse;
-import dev.soakfield.fem.physics.MaterialBehaviour;
+import dev.soakfield.fem.model.DiffusionModel;
+import dev.soakfield.fem.model.LawUse;
+import dev.soakfield.fem.model.MaterialBehaviour;
+import dev.soakfield.fem.physics.SorptionLaw;
 import dev.soakfield.fem.physics.TimeFunction;
 import dev.soakfield.law.api.LawPoint;
 import dev.soakfield.law.api.RateSink;
@@ -73,7 +73,7 @@ class NewtonStepTest {
         new int[tets],
         List.of(new MaterialBehaviour("body", 0, 0, List.of(new LawUse("test", "test", law)))),
         TimeFunction.constant(300),
-        Law.PLAIN);
+        SorptionLaw.PLAIN);
   }
 
   @Test

@@ -5,9 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.soakfield.fem.assembly.FeSpace;
-import dev.soakfield.fem.physics.DiffusionModel;
-import dev.soakfield.fem.physics.FaceCondition;
-import dev.soakfield.fem.physics.FaceGroupMembers;
+import dev.soakfield.fem.model.DiffusionModel;
+import dev.soakfield.fem.model.FaceCondition;
+import dev.soakfield.fem.model.FaceGroupMembers;
 import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.physics.TimeFunction;
 import dev.soakfield.mesh.TetMesh;
