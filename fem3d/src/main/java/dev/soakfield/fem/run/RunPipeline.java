@@ -39,9 +39,9 @@ import java.util.Locale;
  */
 public final class RunPipeline {
   /** Relative residual of each linear solve: tight, so the global balance closes to ~1e-10. */
-  static final double SOLVER_TOLERANCE = 1e-11;
+  public static final double SOLVER_TOLERANCE = 1e-11;
 
-  static final int SOLVER_MAX_ITERATIONS = 5000;
+  public static final int SOLVER_MAX_ITERATIONS = 5000;
 
   /** The copy of the mesh the run used, so a result folder stands on its own. */
   public static final String MESH_COPY = "mesh.msh";

@@ -2,8 +2,8 @@ package dev.soakfield.cli;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.soakfield.fem.bake.BakeSearch;
 import dev.soakfield.fem.model.LawResolver;
-import dev.soakfield.fem.run.BakeSearch;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;

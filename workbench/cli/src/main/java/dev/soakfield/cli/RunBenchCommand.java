@@ -1,6 +1,6 @@
 package dev.soakfield.cli;
 
-import dev.soakfield.fem.run.RunBench;
+import dev.soakfield.fem.bench.RunBench;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;

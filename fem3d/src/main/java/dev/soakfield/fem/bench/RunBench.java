@@ -1,4 +1,4 @@
-package dev.soakfield.fem.run;
+package dev.soakfield.fem.bench;
 
 import dev.soakfield.fem.assembly.FeSpace;
 import dev.soakfield.fem.model.DiffusionModel;
@@ -6,6 +6,7 @@ import dev.soakfield.fem.model.FaceCondition;
 import dev.soakfield.fem.model.FaceGroupMembers;
 import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.physics.TimeFunction;
+import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.time.StepListener;
 import dev.soakfield.fem.time.StepOutcome;
 import dev.soakfield.fem.time.ThetaStepper;

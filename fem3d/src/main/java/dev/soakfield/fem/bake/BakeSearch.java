@@ -1,4 +1,4 @@
-package dev.soakfield.fem.run;
+package dev.soakfield.fem.bake;
 
 import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.casefile.StepControl;
@@ -8,6 +8,10 @@ import dev.soakfield.fem.casefile.TimeSpec;
 import dev.soakfield.fem.model.LawResolver;
 import dev.soakfield.fem.physics.ExposureHistory;
 import dev.soakfield.fem.physics.SorptionLaw;
+import dev.soakfield.fem.run.RunOptions;
+import dev.soakfield.fem.run.RunPipeline;
+import dev.soakfield.fem.run.RunProgress;
+import dev.soakfield.fem.run.SeriesColumn;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
