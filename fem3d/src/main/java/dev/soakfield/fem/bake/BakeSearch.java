@@ -8,10 +8,11 @@ import dev.soakfield.fem.casefile.TimeSpec;
 import dev.soakfield.fem.model.LawResolver;
 import dev.soakfield.fem.physics.ExposureHistory;
 import dev.soakfield.fem.physics.SorptionLaw;
+import dev.soakfield.fem.results.ResultFiles;
+import dev.soakfield.fem.results.Series;
 import dev.soakfield.fem.run.RunOptions;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunProgress;
-import dev.soakfield.fem.run.SeriesColumn;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -95,25 +96,27 @@ public final class BakeSearch {
         first,
         RunProgress.SILENT,
         RunOptions.defaults().withLaws(laws));
-    SeriesColumn curve = SeriesColumn.read(first.resolve("series.csv"), column(target));
+    Series firstSeries = Series.read(first.resolve(ResultFiles.SERIES));
+    double[] curveTimes = firstSeries.require("time");
+    double[] curveValues = firstSeries.require(column(target));
     int runs = 1;
     int hit = -1;
-    for (int i = 0; i < curve.times().length; i++) {
-      if (curve.values()[i] < target.level()) {
+    for (int i = 0; i < curveTimes.length; i++) {
+      if (curveValues[i] < target.level()) {
         hit = i;
         break;
       }
     }
     if (hit < 0) {
       deleteTree(first);
-      return new Result(false, Double.NaN, oven.longest(), curve.times(), curve.values(), runs);
+      return new Result(false, Double.NaN, oven.longest(), curveTimes, curveValues, runs);
     }
     if (hit == 0) {
       deleteTree(first);
-      return new Result(true, 0.0, 0.0, curve.times(), curve.values(), runs);
+      return new Result(true, 0.0, 0.0, curveTimes, curveValues, runs);
     }
-    double lo = curve.times()[hit - 1];
-    double hi = curve.times()[hit];
+    double lo = curveTimes[hit - 1];
+    double hi = curveTimes[hit];
     while (hi - lo > relativeTolerance * hi && runs < 40) {
       double mid = 0.5 * (lo + hi);
       Path trial = work.resolve("bake-trial");
@@ -122,17 +125,17 @@ public final class BakeSearch {
           trial,
           RunProgress.SILENT,
           RunOptions.defaults().withLaws(laws));
-      SeriesColumn end = SeriesColumn.read(trial.resolve("series.csv"), column(target));
+      double[] endValues = Series.read(trial.resolve(ResultFiles.SERIES)).require(column(target));
       runs++;
       deleteTree(trial);
-      if (end.values()[end.values().length - 1] < target.level()) {
+      if (endValues[endValues.length - 1] < target.level()) {
         hi = mid;
       } else {
         lo = mid;
       }
     }
     deleteTree(first);
-    return new Result(true, hi, lo, curve.times(), curve.values(), runs);
+    return new Result(true, hi, lo, curveTimes, curveValues, runs);
   }
 
   private static void checkTarget(CaseSpec spec, Target t) {

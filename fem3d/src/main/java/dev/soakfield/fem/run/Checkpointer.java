@@ -1,5 +1,7 @@
 package dev.soakfield.fem.run;
 
+import dev.soakfield.fem.results.ResultFiles;
+import dev.soakfield.fem.results.StateBundle;
 import dev.soakfield.fem.time.CheckpointSink;
 import dev.soakfield.fem.time.RunCursor;
 import dev.soakfield.fem.time.ThetaStepper;
@@ -15,7 +17,7 @@ import java.nio.file.Path;
  */
 final class Checkpointer implements CheckpointSink {
   /** The checkpoint's file name in a result folder. */
-  static final String NAME = "checkpoint.bin";
+  static final String NAME = ResultFiles.CHECKPOINT;
 
   private final Path file;
   private final RunRecorder recorder;

@@ -6,6 +6,7 @@ import dev.soakfield.fem.casefile.CaseReader;
 import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.model.DiffusionModel;
 import dev.soakfield.fem.model.ModelBuilder;
+import dev.soakfield.fem.results.ResultFolderException;
 import dev.soakfield.fem.time.ThetaStepper;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.load.MeshLoader;

@@ -9,6 +9,11 @@ import dev.soakfield.fem.casefile.TimeScheme;
 import dev.soakfield.fem.model.DiffusionModel;
 import dev.soakfield.fem.model.LawResolver;
 import dev.soakfield.fem.model.ModelBuilder;
+import dev.soakfield.fem.results.ResultFiles;
+import dev.soakfield.fem.results.ResultFolder;
+import dev.soakfield.fem.results.ResultFolderException;
+import dev.soakfield.fem.results.RunManifest;
+import dev.soakfield.fem.results.StateBundle;
 import dev.soakfield.fem.time.RunCursor;
 import dev.soakfield.fem.time.RunTotals;
 import dev.soakfield.fem.time.ThetaStepper;
@@ -44,10 +49,10 @@ public final class RunPipeline {
   public static final int SOLVER_MAX_ITERATIONS = 5000;
 
   /** The copy of the mesh the run used, so a result folder stands on its own. */
-  public static final String MESH_COPY = "mesh.msh";
+  public static final String MESH_COPY = ResultFiles.MESH_COPY;
 
   /** The copy of the case file as it was run (its mesh key still names the original mesh). */
-  public static final String CASE_COPY = "case.json";
+  public static final String CASE_COPY = ResultFiles.CASE_COPY;
 
   private RunPipeline() {}
 

@@ -10,6 +10,9 @@ import dev.soakfield.fem.model.DiffusionModel;
 import dev.soakfield.fem.post.GroupMonitor;
 import dev.soakfield.fem.post.NodalSolubility;
 import dev.soakfield.fem.post.ThresholdClock;
+import dev.soakfield.fem.results.ResultFiles;
+import dev.soakfield.fem.results.SeriesWriter;
+import dev.soakfield.fem.results.StateBundle;
 import dev.soakfield.fem.results.StateFile;
 import dev.soakfield.fem.time.RunTotals;
 import dev.soakfield.fem.time.ThetaStepper;
@@ -38,7 +41,7 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
   private final TetMesh mesh;
   private final RunProgress progress;
   private final List<String> warnings;
-  private final SeriesTable series;
+  private final SeriesWriter series;
   private final GroupMonitor groups;
   private final ThresholdClock clock;
   private final ThetaStepper stepper;
@@ -140,8 +143,8 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
     groupAmount0 = totalAmounts(model.initialPhi(), 0.0);
     Files.createDirectories(dir.resolve("fields"));
     series =
-        new SeriesTable(
-            dir.resolve("series.csv"),
+        new SeriesWriter(
+            dir.resolve(ResultFiles.SERIES),
             header(),
             resume == null ? -1 : (int) resume.scalar("rec.rows"));
     if (resume != null) {
@@ -470,7 +473,7 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
     if (!frames.isEmpty() && frames.get(frames.size() - 1).time() != totals.endTime()) {
       writeFrame(totals.endTime(), totals.finalPhi()); // a stop condition ended the run early
     }
-    PvdWriter.write(dir.resolve("fields.pvd"), frames);
+    PvdWriter.write(dir.resolve(ResultFiles.FIELDS), frames);
     StateFile.write(
         dir.resolve(StateFile.NAME),
         new StateFile.State(totals.endTime(), totals.finalPhi(), stepper.lawStates()));
@@ -526,7 +529,7 @@ final class RunRecorder implements dev.soakfield.fem.time.StepListener, AutoClos
             + " the applicable standards and have them reviewed by a qualified engineer.");
     new ObjectMapper()
         .enable(SerializationFeature.INDENT_OUTPUT)
-        .writeValue(dir.resolve("summary.json").toFile(), root);
+        .writeValue(dir.resolve(ResultFiles.SUMMARY).toFile(), root);
   }
 
   @Override

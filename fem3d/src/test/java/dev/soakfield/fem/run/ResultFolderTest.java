@@ -7,6 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.soakfield.fem.results.ResultFolder;
+import dev.soakfield.fem.results.ResultFolderException;
+import dev.soakfield.fem.results.RunManifest;
 import dev.soakfield.mesh.MeshImport;
 import dev.soakfield.mesh.gen.StructuredMesher;
 import dev.soakfield.mesh.load.MeshLoader;

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.soakfield.fem.results.ResultFolderException;
 import dev.soakfield.fem.results.StateFile;
 import dev.soakfield.mesh.gen.StructuredMesher;
 import dev.soakfield.mesh.msh.MshWriter;

@@ -1,5 +1,6 @@
 package dev.soakfield.app;
 
+import dev.soakfield.fem.results.StoredRun;
 import java.util.Optional;
 
 /**
@@ -85,10 +86,10 @@ public final class Probe {
     if (study.results().isEmpty()) {
       return Optional.empty();
     }
-    ResultSet r = study.results().get();
+    StoredRun r = study.results().get();
     double[] v = new double[r.frameCount()];
     for (int f = 0; f < v.length; f++) {
-      v[f] = valueOf(r.field(f, field));
+      v[f] = valueOf(r.field(f, field.fileName));
     }
     return Optional.of(v);
   }

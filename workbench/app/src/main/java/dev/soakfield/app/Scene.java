@@ -3,6 +3,7 @@ package dev.soakfield.app;
 import dev.soakfield.fem.post.Isosurface;
 import dev.soakfield.fem.post.SectionCut;
 import dev.soakfield.fem.post.TriangleSoup;
+import dev.soakfield.fem.results.StoredRun;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -118,12 +119,12 @@ public final class Scene {
 
   private Optional<double[]> fieldValues() {
     Optional<FieldKind> f = settings.field();
-    Optional<ResultSet> r = study.results();
+    Optional<StoredRun> r = study.results();
     if (f.isEmpty() || r.isEmpty()) {
       return Optional.empty();
     }
     int frame = Math.max(0, Math.min(settings.frame(), r.get().frameCount() - 1));
-    return Optional.of(r.get().field(frame, f.get()));
+    return Optional.of(r.get().field(frame, f.get().fileName));
   }
 
   private void colourSurface(Optional<double[]> values) {

@@ -2,6 +2,7 @@ package dev.soakfield.app;
 
 import dev.soakfield.fem.casefile.CaseReader;
 import dev.soakfield.fem.casefile.CaseSpec;
+import dev.soakfield.fem.results.StoredRun;
 import dev.soakfield.mesh.MeshInputException;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.load.MeshLoader;
@@ -16,9 +17,9 @@ public final class Study {
   private final Path source;
   private final TetMesh mesh;
   private final PartGeometry geometry;
-  private final Optional<ResultSet> results;
+  private final Optional<StoredRun> results;
 
-  private Study(Path source, TetMesh mesh, Optional<ResultSet> results) {
+  private Study(Path source, TetMesh mesh, Optional<StoredRun> results) {
     this.source = source;
     this.mesh = mesh;
     this.geometry = PartGeometry.of(mesh);
@@ -37,14 +38,14 @@ public final class Study {
    */
   public static Study open(Path path) {
     if (Files.isDirectory(path)) {
-      if (!ResultSet.isResultFolder(path)) {
+      if (!StoredRun.isResultFolder(path)) {
         throw new MeshInputException(
             path.toString(),
             "",
             "a folder without fields.pvd",
             "a result folder written by 'soakfield run'");
       }
-      ResultSet r = ResultSet.open(path);
+      StoredRun r = StoredRun.open(path);
       return new Study(path, r.mesh(), Optional.of(r));
     }
     String name = path.getFileName().toString().toLowerCase(Locale.ROOT);
@@ -76,7 +77,7 @@ public final class Study {
     return geometry;
   }
 
-  public Optional<ResultSet> results() {
+  public Optional<StoredRun> results() {
     return results;
   }
 }

@@ -4,10 +4,10 @@ import dev.soakfield.app.FieldKind;
 import dev.soakfield.app.GraphicsServices;
 import dev.soakfield.app.OrbitCamera;
 import dev.soakfield.app.PictureMaker;
-import dev.soakfield.app.ResultSet;
 import dev.soakfield.app.Study;
 import dev.soakfield.app.ViewPicture;
 import dev.soakfield.app.ViewSettings;
+import dev.soakfield.fem.results.StoredRun;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -33,7 +33,7 @@ public final class FieldPictures {
     }
     try {
       Study study = Study.open(results);
-      Optional<ResultSet> r = study.results();
+      Optional<StoredRun> r = study.results();
       if (r.isEmpty()) {
         return Optional.of(results + " holds no field frames");
       }
@@ -54,7 +54,7 @@ public final class FieldPictures {
   private static void draw(
       PictureMaker maker,
       Study study,
-      ResultSet results,
+      StoredRun results,
       Optional<ViewSettings.Plane> section,
       Path file)
       throws IOException {

@@ -4,8 +4,10 @@ import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.MissingNode;
-import dev.soakfield.fem.run.ResultFolderException;
-import dev.soakfield.fem.run.RunManifest;
+import dev.soakfield.fem.results.ResultFiles;
+import dev.soakfield.fem.results.ResultFolderException;
+import dev.soakfield.fem.results.RunManifest;
+import dev.soakfield.fem.results.Series;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.TimeText;
 import dev.soakfield.mesh.AtomicFiles;
@@ -94,13 +96,11 @@ public final class ReportWriter {
   }
 
   static ReportDocument build(Path folder, RunManifest manifest) throws IOException {
-    JsonNode summary = json(folder.resolve("summary.json"));
+    JsonNode summary = json(folder.resolve(ResultFiles.SUMMARY));
     JsonNode kase = json(folder.resolve(RunPipeline.CASE_COPY));
-    Path seriesFile = folder.resolve("series.csv");
-    Optional<SeriesCsv> series =
-        Files.isRegularFile(seriesFile)
-            ? Optional.of(SeriesCsv.read(seriesFile))
-            : Optional.empty();
+    Path seriesFile = folder.resolve(ResultFiles.SERIES);
+    Optional<Series> series =
+        Files.isRegularFile(seriesFile) ? Optional.of(Series.read(seriesFile)) : Optional.empty();
     double end = summary.path("solver").path("end_time").asDouble(Double.NaN);
     if (Double.isNaN(end) && series.isPresent()) {
       end = series.get().last("time");
@@ -143,7 +143,7 @@ public final class ReportWriter {
     }
   }
 
-  private static void caseSummary(ReportDocument doc, JsonNode kase, Optional<SeriesCsv> series) {
+  private static void caseSummary(ReportDocument doc, JsonNode kase, Optional<Series> series) {
     doc.heading("Case");
     if (kase.isMissingNode()) {
       doc.paragraph("No readable case copy (case.json) in the folder.");
@@ -193,7 +193,7 @@ public final class ReportWriter {
     doc.bullets(other);
   }
 
-  private static void curves(ReportDocument doc, SeriesCsv s, TimeAxis axis) throws IOException {
+  private static void curves(ReportDocument doc, Series s, TimeAxis axis) throws IOException {
     double[] t = s.column("time").orElse(new double[s.rows()]);
     doc.heading("Uptake");
     SeriesPlot uptake =
@@ -221,8 +221,7 @@ public final class ReportWriter {
     }
   }
 
-  private static void groupTables(ReportDocument doc, SeriesCsv s, TimeAxis axis)
-      throws IOException {
+  private static void groupTables(ReportDocument doc, Series s, TimeAxis axis) throws IOException {
     doc.heading("Amount per volume group");
     doc.paragraph("At the last recorded time, t = " + TimeText.of(s.last("time")) + ":");
     List<List<String>> rows = new ArrayList<>();

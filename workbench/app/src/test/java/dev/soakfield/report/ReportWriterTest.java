@@ -3,8 +3,8 @@ package dev.soakfield.report;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.soakfield.fem.run.ResultFolder;
-import dev.soakfield.fem.run.RunManifest;
+import dev.soakfield.fem.results.ResultFolder;
+import dev.soakfield.fem.results.RunManifest;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;

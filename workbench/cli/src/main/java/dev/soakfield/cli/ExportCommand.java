@@ -2,10 +2,11 @@ package dev.soakfield.cli;
 
 import dev.soakfield.fem.assembly.CsrMatrix;
 import dev.soakfield.fem.casefile.TimeScheme;
+import dev.soakfield.fem.results.ResultFiles;
+import dev.soakfield.fem.results.Series;
 import dev.soakfield.fem.run.RebuiltRun;
 import dev.soakfield.fem.time.TimeSettings;
 import dev.soakfield.mesh.AtomicFiles;
-import dev.soakfield.report.SeriesCsv;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.Writer;
@@ -68,7 +69,7 @@ final class ExportCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
-    Path series = dir.resolve("series.csv");
+    Path series = dir.resolve(ResultFiles.SERIES);
     if (!Files.isRegularFile(series)) {
       throw new UserInputException(
           dir + ": found no series.csv, expected a result folder written by 'soakfield run'");
@@ -81,29 +82,21 @@ final class ExportCommand implements Callable<Integer> {
       int rows = writeCsv(series, target.csv);
       out.printf(Locale.ROOT, "wrote %d rows to %s%n", rows, target.csv);
     } else {
-      out.println(writeMatrix(SeriesCsv.read(series), target.mtx));
+      out.println(writeMatrix(Series.read(series), target.mtx));
     }
     out.flush();
     return ExitCodes.OK;
   }
 
-  /** The column name with its unit; columns this version does not know keep their name. */
+  /** The column name with its unit, as {@link Series#withUnit} gives it. */
   static String withUnit(String name) {
-    String base = name.contains(":") ? name.substring(0, name.indexOf(':') + 1) : name;
-    String unit =
-        switch (base) {
-          case "time" -> "s";
-          case "amount", "amount:", "inflow:", "balance_error" -> "c*m^3";
-          case "max:", "probe:" -> "c";
-          case "inflow_rate:" -> "c*m^3/s";
-          default -> "";
-        };
-    return unit.isEmpty() ? name : name + " [" + unit + "]";
+    return Series.withUnit(name);
   }
 
   private static int writeCsv(Path series, Path csv) throws IOException {
+    Series.read(series); // a bad cell is refused here, with its line and column, before writing
     List<String> lines = Files.readAllLines(series, StandardCharsets.UTF_8);
-    List<String> header = SeriesCsv.split(lines.get(0));
+    List<String> header = Series.split(lines.get(0));
     List<String> named = new ArrayList<>();
     for (String h : header) {
       String u = withUnit(h);
@@ -124,7 +117,7 @@ final class ExportCommand implements Callable<Integer> {
     return lines.size() - 1;
   }
 
-  private String writeMatrix(SeriesCsv series, Path mtx) throws IOException {
+  private String writeMatrix(Series series, Path mtx) throws IOException {
     double[] t =
         series
             .column("time")

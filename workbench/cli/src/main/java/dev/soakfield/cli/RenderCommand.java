@@ -4,11 +4,11 @@ import dev.soakfield.app.FieldKind;
 import dev.soakfield.app.GraphicsServices;
 import dev.soakfield.app.OrbitCamera;
 import dev.soakfield.app.PictureMaker;
-import dev.soakfield.app.ResultSet;
 import dev.soakfield.app.Scene;
 import dev.soakfield.app.Study;
 import dev.soakfield.app.ViewPicture;
 import dev.soakfield.app.ViewSettings;
+import dev.soakfield.fem.results.StoredRun;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -135,7 +135,7 @@ final class RenderCommand implements Callable<Integer> {
 
   private ViewSettings settings(Study study) {
     ViewSettings s = new ViewSettings();
-    Optional<ResultSet> r = study.results();
+    Optional<StoredRun> r = study.results();
     if (field.equalsIgnoreCase("groups") || r.isEmpty()) {
       s.field(Optional.empty());
     } else {

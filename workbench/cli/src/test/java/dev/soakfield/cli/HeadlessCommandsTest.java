@@ -7,9 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.soakfield.app.GraphicsServices;
+import dev.soakfield.fem.results.Series;
 import dev.soakfield.mesh.gen.StructuredMesher;
 import dev.soakfield.mesh.msh.MshWriter;
-import dev.soakfield.report.SeriesCsv;
 import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -87,7 +87,7 @@ class HeadlessCommandsTest {
     assertEquals(0, run.exitCode(), run.err());
     assertTrue(run.err().contains("no field picture: this build has no window"), run.err());
     assertTrue(Files.isRegularFile(out.resolve("report.html")));
-    SeriesCsv series = SeriesCsv.read(out.resolve("series.csv"));
+    Series series = Series.read(out.resolve("series.csv"));
     double[] amount = series.column("amount").orElseThrow();
     double[] time = series.column("time").orElseThrow();
     // against the initial content c0·V = 1 × 1e-11 m³ (the first row already has dry faces)
@@ -105,7 +105,7 @@ class HeadlessCommandsTest {
     CliRun export = CliRun.of("export", out.toString(), "--csv", csv.toString());
     assertEquals(0, export.exitCode(), export.err());
     List<String> lines = Files.readAllLines(csv);
-    assertEquals("time [s]", SeriesCsv.split(lines.get(0)).get(0));
+    assertEquals("time [s]", Series.split(lines.get(0)).get(0));
     assertEquals(
         Files.readAllLines(out.resolve("series.csv")).subList(1, lines.size()),
         lines.subList(1, lines.size()));

@@ -7,8 +7,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.soakfield.fem.assembly.CsrMatrix;
+import dev.soakfield.fem.results.Series;
 import dev.soakfield.fem.run.RebuiltRun;
-import dev.soakfield.report.SeriesCsv;
 import java.io.Reader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -108,7 +108,7 @@ class ResultCommandsTest {
     CliRun r = CliRun.of("export", out.toString(), "--csv", csv.toString());
     assertEquals(0, r.exitCode(), r.err());
     List<String> lines = Files.readAllLines(csv);
-    List<String> header = SeriesCsv.split(lines.get(0));
+    List<String> header = Series.split(lines.get(0));
     assertEquals("time [s]", header.get(0));
     assertTrue(header.contains("amount [c*m^3]"), header.toString());
     assertTrue(header.contains("probe:corner [c]"), header.toString());
@@ -123,7 +123,7 @@ class ResultCommandsTest {
     Path mtx = dir.resolve("step.mtx");
     CliRun r = CliRun.of("export", out.toString(), "--mtx", mtx.toString(), "--time", "3600");
     assertEquals(0, r.exitCode(), r.err());
-    SeriesCsv series = SeriesCsv.read(out.resolve("series.csv"));
+    Series series = Series.read(out.resolve("series.csv"));
     double[] t = series.column("time").orElseThrow();
     int k = 1;
     while (t[k] < 3600) {

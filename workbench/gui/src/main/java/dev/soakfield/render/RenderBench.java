@@ -152,7 +152,7 @@ public final class RenderBench {
 
   private static void isosurfaces(PrintWriter out, Study study) {
     PartGeometry g = study.geometry();
-    double[] field = study.results().orElseThrow().field(1, FieldKind.CONCENTRATION);
+    double[] field = study.results().orElseThrow().field(1, FieldKind.CONCENTRATION.fileName);
     double[] xyz = g.coordinates();
     int[] tets = g.connectivity();
     boolean[] all = new boolean[0];

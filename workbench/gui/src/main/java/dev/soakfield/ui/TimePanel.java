@@ -4,9 +4,9 @@ import static org.lwjgl.nuklear.Nuklear.*;
 
 import dev.soakfield.app.Annotations;
 import dev.soakfield.app.Playback;
-import dev.soakfield.app.ResultSet;
 import dev.soakfield.app.ViewSettings;
 import dev.soakfield.app.WorkbenchModel;
+import dev.soakfield.fem.results.StoredRun;
 import java.nio.FloatBuffer;
 import java.util.Locale;
 import java.util.Optional;
@@ -24,7 +24,7 @@ final class TimePanel {
   }
 
   void draw(MemoryStack stack) {
-    Optional<ResultSet> r = model.study().results();
+    Optional<StoredRun> r = model.study().results();
     if (r.isEmpty()) {
       nk_layout_row_dynamic(ctx, 20, 1);
       nk_label(ctx, "no results: open a result folder to see fields over time", NK_TEXT_LEFT);

@@ -5,9 +5,9 @@ import static org.lwjgl.nuklear.Nuklear.*;
 import dev.soakfield.app.Annotations;
 import dev.soakfield.app.ProbeSelection;
 import dev.soakfield.app.Resample;
-import dev.soakfield.app.ResultSet;
-import dev.soakfield.app.SeriesTable;
 import dev.soakfield.app.WorkbenchModel;
+import dev.soakfield.fem.results.Series;
+import dev.soakfield.fem.results.StoredRun;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -33,8 +33,8 @@ final class UptakePanel {
     nk_layout_row_dynamic(ctx, 20, 1);
     nk_label(ctx, probe.hover().isEmpty() ? "(point at the part)" : probe.hover(), NK_TEXT_LEFT);
     probe.picked().ifPresent(p -> nk_label(ctx, "clicked: " + p, NK_TEXT_LEFT));
-    Optional<SeriesTable> series = model.study().results().flatMap(ResultSet::series);
-    if (series.isPresent() && series.get().rowCount() > 1 && series.get().has("time")) {
+    Optional<Series> series = model.study().results().flatMap(StoredRun::series);
+    if (series.isPresent() && series.get().rows() > 1 && series.get().has("time")) {
       amounts(stack, series.get());
     }
     if (probe.probe().isPresent()) {
@@ -42,15 +42,15 @@ final class UptakePanel {
     }
   }
 
-  private void amounts(MemoryStack stack, SeriesTable s) {
-    double[] t = s.column("time");
+  private void amounts(MemoryStack stack, Series s) {
+    double[] t = s.require("time");
     nk_label(ctx, "Amount per part against time", NK_TEXT_LEFT);
     nk_label(ctx, "0 .. " + Annotations.time(t[t.length - 1]), NK_TEXT_LEFT);
     List<String> parts = s.suffixes("amount:");
     List<double[]> curves = new ArrayList<>();
     double max = 0;
     for (String p : parts) {
-      double[] y = Resample.even(t, s.column("amount:" + p), 60);
+      double[] y = Resample.even(t, s.require("amount:" + p), 60);
       curves.add(y);
       for (double v : y) {
         max = Math.max(max, v);

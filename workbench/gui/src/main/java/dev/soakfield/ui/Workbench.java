@@ -5,10 +5,10 @@ import static org.lwjgl.nuklear.Nuklear.*;
 import static org.lwjgl.opengl.GL33C.*;
 
 import dev.soakfield.app.OrbitCamera;
-import dev.soakfield.app.ResultSet;
 import dev.soakfield.app.Study;
 import dev.soakfield.app.ViewSettings;
 import dev.soakfield.app.WorkbenchModel;
+import dev.soakfield.fem.results.StoredRun;
 import dev.soakfield.render.GlSurface;
 import dev.soakfield.render.SceneRenderer;
 import java.awt.image.BufferedImage;
@@ -101,7 +101,7 @@ public final class Workbench implements AutoCloseable {
   public void frame() {
     layout.update(surface, model.camera());
     gestures.beginFrame();
-    Optional<ResultSet> r = model.study().results();
+    Optional<StoredRun> r = model.study().results();
     if (r.isPresent() && model.playback().playing()) {
       model.playback().advance(glfwGetTime(), model.settings(), r.get().frameCount());
     }

@@ -1,4 +1,4 @@
-package dev.soakfield.fem.run;
+package dev.soakfield.fem.results;
 
 import java.io.IOException;
 import java.nio.file.AtomicMoveNotSupportedException;
@@ -157,7 +157,7 @@ public final class ResultFolder {
     }
   }
 
-  static ResultFolderException unwritable(Path folder, IOException e) {
+  public static ResultFolderException unwritable(Path folder, IOException e) {
     String reason = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
     return new ResultFolderException(
         folder

@@ -1,4 +1,4 @@
-package dev.soakfield.fem.run;
+package dev.soakfield.fem.results;
 
 /**
  * The output folder cannot take this run's results: it holds another case's results or files that

@@ -1,4 +1,4 @@
-package dev.soakfield.fem.run;
+package dev.soakfield.fem.results;
 
 import java.io.BufferedWriter;
 import java.io.IOException;
@@ -7,13 +7,16 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 
-/** {@code series.csv}: a header, then one row of numbers per step, written as the run goes. */
-final class SeriesTable implements AutoCloseable {
+/**
+ * {@code series.csv} written as the run goes: a header, then one row of numbers per step; {@link
+ * Series} reads it back.
+ */
+public final class SeriesWriter implements AutoCloseable {
   private final BufferedWriter out;
   private final int columns;
   private int rowCount;
 
-  SeriesTable(Path file, List<String> header) throws IOException {
+  public SeriesWriter(Path file, List<String> header) throws IOException {
     this(file, header, -1);
   }
 
@@ -21,11 +24,11 @@ final class SeriesTable implements AutoCloseable {
    * A table that goes on from a checkpoint: the file keeps its header and first {@code rows} rows
    * (what the checkpoint saw) and later rows are appended; {@code rows} = −1 starts afresh.
    */
-  SeriesTable(Path file, List<String> header, int rows) throws IOException {
+  public SeriesWriter(Path file, List<String> header, int rows) throws IOException {
     columns = header.size();
     if (rows >= 0) {
       List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
-      String expected = String.join(",", header.stream().map(SeriesTable::quote).toList());
+      String expected = String.join(",", header.stream().map(SeriesWriter::quote).toList());
       if (lines.size() < rows + 1 || !lines.get(0).equals(expected)) {
         throw new IOException(
             file
@@ -54,7 +57,7 @@ final class SeriesTable implements AutoCloseable {
   }
 
   /** Writes what is buffered through to the file (before a checkpoint counts its rows). */
-  void flush() throws IOException {
+  public void flush() throws IOException {
     out.flush();
   }
 
@@ -63,11 +66,11 @@ final class SeriesTable implements AutoCloseable {
   }
 
   /** Rows written so far, the header not counted. */
-  int rows() {
+  public int rows() {
     return rowCount;
   }
 
-  void row(double[] values) throws IOException {
+  public void row(double[] values) throws IOException {
     rowCount++;
     if (values.length != columns) {
       throw new IllegalArgumentException(values.length + " values for " + columns + " columns");

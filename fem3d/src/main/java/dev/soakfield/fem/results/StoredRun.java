@@ -1,4 +1,4 @@
-package dev.soakfield.app;
+package dev.soakfield.fem.results;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -19,17 +19,18 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * A result folder written by {@code soakfield run}: the mesh it used (for the face groups, which
- * the field files do not hold), the frames listed in fields.pvd (read when first asked for, a few
- * kept), series.csv and summary.json.
+ * A finished result folder read back, the typed view that reports, export and the workbench share:
+ * the mesh the run used (for the face groups, which the field files do not hold), the frames listed
+ * in fields.pvd (read when first asked for, a few kept), the series ({@link Series}) and
+ * summary.json. {@link ResultFolder} is the same folder while a run writes it.
  */
-public final class ResultSet {
+public final class StoredRun {
   private static final int FRAMES_KEPT = 4;
 
   private final Path folder;
   private final TetMesh mesh;
   private final List<PvdEntry> frames;
-  private final Optional<SeriesTable> series;
+  private final Optional<Series> series;
   private final Optional<JsonNode> summary;
   private final Map<Integer, VtuGrid> cache =
       new LinkedHashMap<>(8, 0.75f, true) {
@@ -41,11 +42,11 @@ public final class ResultSet {
         }
       };
 
-  private ResultSet(
+  private StoredRun(
       Path folder,
       TetMesh mesh,
       List<PvdEntry> frames,
-      Optional<SeriesTable> series,
+      Optional<Series> series,
       Optional<JsonNode> summary) {
     this.folder = folder;
     this.mesh = mesh;
@@ -56,7 +57,7 @@ public final class ResultSet {
 
   /** True when {@code dir} looks like a result folder (it holds fields.pvd). */
   public static boolean isResultFolder(Path dir) {
-    return Files.isRegularFile(dir.resolve("fields.pvd"));
+    return Files.isRegularFile(dir.resolve(ResultFiles.FIELDS));
   }
 
   /**
@@ -64,20 +65,21 @@ public final class ResultSet {
    *
    * @throws MeshInputException when fields.pvd, the mesh or a file they name is missing or does not
    *     fit the others (the message names the file)
+   * @throws ResultFolderException when series.csv holds a bad cell (file, line and column)
    */
-  public static ResultSet open(Path folder) {
-    Path pvd = folder.resolve("fields.pvd");
+  public static StoredRun open(Path folder) {
+    Path pvd = folder.resolve(ResultFiles.FIELDS);
     List<PvdEntry> frames = PvdReader.read(pvd);
-    Optional<JsonNode> summary = readSummary(folder.resolve("summary.json"));
+    Optional<JsonNode> summary = readSummary(folder.resolve(ResultFiles.SUMMARY));
     Path meshFile = meshFile(folder, summary);
     TetMesh mesh = MeshLoader.load(meshFile, AssemblyOptions.defaults()).mesh();
-    ResultSet r =
-        new ResultSet(
+    StoredRun r =
+        new StoredRun(
             folder,
             mesh,
             frames,
-            Files.isRegularFile(folder.resolve("series.csv"))
-                ? Optional.of(SeriesTable.read(folder.resolve("series.csv")))
+            Files.isRegularFile(folder.resolve(ResultFiles.SERIES))
+                ? Optional.of(Series.read(folder.resolve(ResultFiles.SERIES)))
                 : Optional.empty(),
             summary);
     VtuGrid first = r.frame(0);
@@ -97,7 +99,7 @@ public final class ResultSet {
   }
 
   private static Path meshFile(Path folder, Optional<JsonNode> summary) {
-    Path local = folder.resolve("mesh.msh");
+    Path local = folder.resolve(ResultFiles.MESH_COPY);
     if (Files.isRegularFile(local)) {
       return local;
     }
@@ -115,7 +117,7 @@ public final class ResultSet {
     }
     if (!Files.isRegularFile(p)) {
       throw new MeshInputException(
-          folder.resolve("summary.json").toString(),
+          folder.resolve(ResultFiles.SUMMARY).toString(),
           "mesh.file",
           "'" + named + "', which does not exist",
           "the mesh the run used; copy it into the result folder as mesh.msh");
@@ -131,7 +133,7 @@ public final class ResultSet {
       return Optional.of(new ObjectMapper().readTree(file.toFile()));
     } catch (IOException e) {
       throw new MeshInputException(
-          file.toString(), "", "unreadable JSON (" + e.getMessage() + ")", "summary.json");
+          file.toString(), "", "unreadable JSON (" + e.getMessage() + ")", ResultFiles.SUMMARY);
     }
   }
 
@@ -162,7 +164,7 @@ public final class ResultSet {
     return best;
   }
 
-  public Optional<SeriesTable> series() {
+  public Optional<Series> series() {
     return series;
   }
 
@@ -184,19 +186,19 @@ public final class ResultSet {
   }
 
   /**
-   * The nodal field of one frame.
+   * The nodal field of one frame, by its name in the frame files ("c", "phi", ...).
    *
    * @throws MeshInputException when the frame's file lacks it
    */
-  public double[] field(int frame, FieldKind kind) {
+  public double[] field(int frame, String fieldName) {
     VtuGrid g = frame(frame);
-    if (!g.pointFieldNames().contains(kind.fileName)) {
+    if (!g.pointFieldNames().contains(fieldName)) {
       throw new MeshInputException(
           framePath(frame).toString(),
           "PointData",
           "the fields " + g.pointFieldNames(),
-          "a point field '" + kind.fileName + "'");
+          "a point field '" + fieldName + "'");
     }
-    return g.pointField(kind.fileName);
+    return g.pointField(fieldName);
   }
 }

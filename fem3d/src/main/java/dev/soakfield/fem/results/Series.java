@@ -1,6 +1,5 @@
-package dev.soakfield.report;
+package dev.soakfield.fem.results;
 
-import dev.soakfield.fem.run.ResultFolderException;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -10,14 +9,15 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * {@code series.csv} read back: columns found by name, so columns added later are carried along.
- * Cells hold numbers; an empty or non-numeric cell reads as NaN.
+ * {@code series.csv} read back, the one reader of it: columns found by name, so columns added later
+ * are carried along. Cells hold numbers ("NaN" included); an empty cell is a missing value and
+ * reads as NaN; anything else is an error that names the file, the line and the column.
  */
-public final class SeriesCsv {
+public final class Series {
   private final List<String> names;
   private final double[][] columns;
 
-  private SeriesCsv(List<String> names, double[][] columns) {
+  private Series(List<String> names, double[][] columns) {
     this.names = List.copyOf(names);
     this.columns = columns;
   }
@@ -25,10 +25,17 @@ public final class SeriesCsv {
   /**
    * Reads {@code file}.
    *
-   * @throws ResultFolderException when a row's cells do not match the header (file and line)
+   * @throws ResultFolderException when the file cannot be read, a row's cells do not match the
+   *     header, or a cell is no number (file, line, column, what was found and what was expected)
    */
-  public static SeriesCsv read(Path file) throws IOException {
-    List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
+  public static Series read(Path file) {
+    List<String> lines;
+    try {
+      lines = Files.readAllLines(file, StandardCharsets.UTF_8);
+    } catch (IOException e) {
+      throw new ResultFolderException(
+          file + ": found an unreadable file (" + e.getMessage() + "), expected a series table", e);
+    }
     if (lines.isEmpty()) {
       throw new ResultFolderException(file + ": found an empty file, expected a header line");
     }
@@ -53,7 +60,7 @@ public final class SeriesCsv {
       }
       double[] row = new double[cells.size()];
       for (int c = 0; c < row.length; c++) {
-        row[c] = parse(cells.get(c));
+        row[c] = parse(file, i + 1, names.get(c), cells.get(c));
       }
       rows.add(row);
     }
@@ -63,14 +70,25 @@ public final class SeriesCsv {
         columns[c][r] = rows.get(r)[c];
       }
     }
-    return new SeriesCsv(names, columns);
+    return new Series(names, columns);
   }
 
-  private static double parse(String cell) {
-    try {
-      return cell.isEmpty() ? Double.NaN : Double.parseDouble(cell);
-    } catch (NumberFormatException e) {
+  private static double parse(Path file, int line, String column, String cell) {
+    if (cell.isBlank()) {
       return Double.NaN;
+    }
+    try {
+      return Double.parseDouble(cell.strip());
+    } catch (NumberFormatException e) {
+      throw new ResultFolderException(
+          file
+              + ", line "
+              + line
+              + ", column '"
+              + column
+              + "': found '"
+              + cell
+              + "', expected a number");
     }
   }
 
@@ -106,6 +124,24 @@ public final class SeriesCsv {
   /** Column names in file order. */
   public List<String> names() {
     return names;
+  }
+
+  /** True when the table has a column called {@code name}. */
+  public boolean has(String name) {
+    return names.contains(name);
+  }
+
+  /**
+   * The column called {@code name}, a copy, for callers that cannot go on without it.
+   *
+   * @throws ResultFolderException when there is no such column, naming those there are
+   */
+  public double[] require(String name) {
+    return column(name)
+        .orElseThrow(
+            () ->
+                new ResultFolderException(
+                    "series.csv: found no column '" + name + "', expected one of " + names));
   }
 
   /** Number of data rows. */
@@ -145,5 +181,19 @@ public final class SeriesCsv {
       }
     }
     return m;
+  }
+
+  /** The column name with its unit; columns this version does not know keep their name. */
+  public static String withUnit(String name) {
+    String base = name.contains(":") ? name.substring(0, name.indexOf(':') + 1) : name;
+    String unit =
+        switch (base) {
+          case "time" -> "s";
+          case "amount", "amount:", "inflow:", "balance_error" -> "c*m^3";
+          case "max:", "probe:" -> "c";
+          case "inflow_rate:" -> "c*m^3/s";
+          default -> "";
+        };
+    return unit.isEmpty() ? name : name + " [" + unit + "]";
   }
 }

@@ -1,4 +1,4 @@
-package dev.soakfield.fem.run;
+package dev.soakfield.fem.results;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -44,7 +44,7 @@ public record RunManifest(
     Optional<String> message,
     List<String> files) {
   /** The file name inside a result folder. */
-  public static final String FILE = "manifest.json";
+  public static final String FILE = ResultFiles.MANIFEST;
 
   /** Where a run stands. */
   public enum Status {

@@ -1,11 +1,10 @@
-package dev.soakfield.report;
+package dev.soakfield.fem.results;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.soakfield.fem.run.ResultFolderException;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -13,13 +12,13 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-class SeriesCsvTest {
+class SeriesTest {
   @TempDir Path dir;
 
   @Test
   void quotedCellsFollowRfc4180() {
     // RFC 4180, section 2, rules 6 and 7: commas inside quotes, a doubled quote for a quote
-    assertEquals(List.of("a", "b,c", "d\"e", ""), SeriesCsv.split("a,\"b,c\",\"d\"\"e\","));
+    assertEquals(List.of("a", "b,c", "d\"e", ""), Series.split("a,\"b,c\",\"d\"\"e\","));
   }
 
   @Test
@@ -28,7 +27,7 @@ class SeriesCsvTest {
         Files.writeString(
             dir.resolve("series.csv"),
             "time,new_column,amount,probe:core\n0,7,0,\n10,8,0.5,0.25\n20,9,0.75,0.5\n");
-    SeriesCsv s = SeriesCsv.read(f);
+    Series s = Series.read(f);
     assertArrayEquals(new double[] {0, 0.5, 0.75}, s.column("amount").orElseThrow());
     assertEquals(List.of("core"), s.suffixes("probe:"));
     assertTrue(Double.isNaN(s.column("probe:core").orElseThrow()[0]), "an empty cell");
@@ -40,23 +39,25 @@ class SeriesCsvTest {
   @Test
   void aRowThatDoesNotFitTheHeaderNamesItsLine() throws IOException {
     Path f = Files.writeString(dir.resolve("series.csv"), "time,amount\n0,0\n1\n");
-    ResultFolderException e = assertThrows(ResultFolderException.class, () -> SeriesCsv.read(f));
+    ResultFolderException e = assertThrows(ResultFolderException.class, () -> Series.read(f));
     assertTrue(e.getMessage().contains("line 3: found 1 cells, expected 2"), e.getMessage());
   }
 
   @Test
-  void theTimeAxisTakesTheLargestUnitSpannedTwice() {
-    assertEquals(TimeAxis.SECONDS, TimeAxis.forEnd(100));
-    assertEquals(TimeAxis.MINUTES, TimeAxis.forEnd(600));
-    assertEquals(TimeAxis.HOURS, TimeAxis.forEnd(86400));
-    assertEquals(TimeAxis.DAYS, TimeAxis.forEnd(604800));
+  void aCellThatIsNoNumberNamesItsLineAndColumn() throws IOException {
+    Path f = Files.writeString(dir.resolve("series.csv"), "time,amount\n0,0\n1,0.5kg\n");
+    ResultFolderException e = assertThrows(ResultFolderException.class, () -> Series.read(f));
+    assertTrue(
+        e.getMessage().endsWith("line 3, column 'amount': found '0.5kg', expected a number"),
+        e.getMessage());
   }
 
   @Test
-  void markdownEscapesPipesAndHtmlEscapesMarkup() {
-    ReportDocument d =
-        new ReportDocument("t").table(List.of("a", "b"), List.of(List.of("x|y", "<b>")));
-    assertTrue(d.toMarkdown().contains("| x\\|y | <b> |"), d.toMarkdown());
-    assertTrue(d.toHtml().contains("<td>&lt;b&gt;</td>"), d.toHtml());
+  void aMissingColumnThatACallerNeedsNamesTheColumnsThere() throws IOException {
+    Path f = Files.writeString(dir.resolve("series.csv"), "time,amount\n0,0\n");
+    ResultFolderException e =
+        assertThrows(ResultFolderException.class, () -> Series.read(f).require("temperature"));
+    assertTrue(e.getMessage().contains("no column 'temperature'"), e.getMessage());
+    assertTrue(e.getMessage().contains("[time, amount]"), e.getMessage());
   }
 }

@@ -1,4 +1,4 @@
-package dev.soakfield.fem.run;
+package dev.soakfield.fem.results;
 
 import dev.soakfield.mesh.AtomicFiles;
 import java.io.BufferedInputStream;

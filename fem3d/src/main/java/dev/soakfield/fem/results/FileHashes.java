@@ -1,4 +1,4 @@
-package dev.soakfield.fem.run;
+package dev.soakfield.fem.results;
 
 import java.io.IOException;
 import java.io.InputStream;
