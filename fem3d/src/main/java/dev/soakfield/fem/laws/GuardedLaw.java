@@ -141,16 +141,16 @@ public final class GuardedLaw {
 
   /** The amount per m³ the state holds ({@code time}: when, for messages). */
   public double trappedAmount(StateView state, double temperature, double time) {
-    double held;
+    double trapped;
     try {
-      held = law.trappedAmount(state, temperature);
+      trapped = law.trappedAmount(state, temperature);
     } catch (RuntimeException | LinkageError e) {
       throw fault(time, "trappedAmount at T = " + temperature + " K " + threw(e), e);
     }
-    if (!Double.isFinite(held)) {
-      throw fault(time, "trappedAmount gave " + held + ", expected a finite number", null);
+    if (!Double.isFinite(trapped)) {
+      throw fault(time, "trappedAmount gave " + trapped + ", expected a finite number", null);
     }
-    return held;
+    return trapped;
   }
 
   private void checkState(double[] state, double time, String call) {

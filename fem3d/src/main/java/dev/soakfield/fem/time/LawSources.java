@@ -241,9 +241,9 @@ final class LawSources {
     return out;
   }
 
-  /** The amount held in the committed states, per volume group of the mesh. */
-  double[] heldPerGroup(double kelvin) {
-    return heldPerGroup(committedView(), kelvin);
+  /** The amount trapped in the committed states, per volume group of the mesh. */
+  double[] trappedPerGroup(double kelvin) {
+    return trappedPerGroup(committedView(), kelvin);
   }
 
   private double[][] committedView() {
@@ -255,7 +255,7 @@ final class LawSources {
   }
 
   /** The amount the given states hold, per volume group (material name = volume group name). */
-  double[] heldPerGroup(double[][] states, double kelvin) {
+  double[] trappedPerGroup(double[][] states, double kelvin) {
     var groups = model.space().mesh().volumeGroups();
     double[] out = new double[groups.size()];
     for (int n = 0; n < parts.size(); n++) {
@@ -275,21 +275,21 @@ final class LawSources {
   }
 
   /** Total amount the committed states hold (no copies). */
-  double heldNow(double kelvin) {
-    return held(committedView(), kelvin);
+  double trappedNow(double kelvin) {
+    return trapped(committedView(), kelvin);
   }
 
   /** Total amount the given states hold. */
-  double held(double[][] states, double kelvin) {
+  double trapped(double[][] states, double kelvin) {
     double s = 0;
-    for (double v : heldPerGroup(states, kelvin)) {
+    for (double v : trappedPerGroup(states, kelvin)) {
       s += v;
     }
     return s;
   }
 
   /** Held amount per m³ at each node (the weighted mean over the materials meeting there). */
-  double[] heldField(double kelvin) {
+  double[] trappedField(double kelvin) {
     int n = model.space().dofCount();
     double[] sum = new double[n];
     double[] weight = new double[n];

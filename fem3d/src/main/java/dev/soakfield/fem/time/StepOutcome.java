@@ -7,7 +7,7 @@ package dev.soakfield.fem.time;
  * @param faceInflow amount that entered through each face group during the step (by mesh face group
  *     index; 0 for sealed and interface groups)
  * @param sourceAmount net amount produced by volume sources during the step (negative for sinks);
- *     what source laws move into or out of their held state is not production
+ *     what source laws move into or out of their trapped state is not production
  * @param amount the total amount at the end of the step: 1ᵀ M φ plus what source laws hold
  * @param iterations linear solver iterations of the step
  * @param solveSeconds time spent in the linear solve (and any preconditioner set-up)

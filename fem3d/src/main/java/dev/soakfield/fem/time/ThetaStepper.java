@@ -23,11 +23,12 @@ import java.util.TreeSet;
  * is conserved when the solubility changes with temperature. q are the nodal sources of the
  * materials' source laws, integrated implicitly (their own state advanced over the step) and solved
  * for by Newton's method with a backtracking line search; without laws a step is one linear solve.
- * R, nonzero only on held nodes, is the amount those nodes take in during the step (the consistent
- * reaction, so the balance closes). Held nodes are eliminated symmetrically, so the system stays
- * symmetric positive definite for conjugate gradients. Coefficient matrices depend on time only
- * through the temperature and are cached for the last two temperatures; the system matrix and its
- * preconditioner are rebuilt only when dt, theta, a transfer coefficient or the temperature change.
+ * R, nonzero only on prescribed nodes, is the amount those nodes take in during the step (the
+ * consistent reaction, so the balance closes). Held nodes are eliminated symmetrically, so the
+ * system stays symmetric positive definite for conjugate gradients. Coefficient matrices depend on
+ * time only through the temperature and are cached for the last two temperatures; the system matrix
+ * and its preconditioner are rebuilt only when dt, theta, a transfer coefficient or the temperature
+ * change.
  *
  * <p>The stepper holds the committed state of the source laws: {@link #commit} after each accepted
  * step.
@@ -58,7 +59,7 @@ public final class ThetaStepper {
   private final int[] diagonalPosition;
   // Held rows keep their own diagonal (x_i = φ_D scaled by it), so they do not dominate ‖b‖ and the
   // solver's relative tolerance stays meaningful for the free rows.
-  private final double[] heldDiagonal;
+  private final double[] prescribedDiagonal;
   private final boolean coefficientsVary;
   private final Coefficients[] cache = new Coefficients[2];
   private long useCounter;
@@ -197,7 +198,7 @@ public final class ThetaStepper {
     for (int i = 0; i < n; i++) {
       diagonalPosition[i] = system.indexOf(i, i);
     }
-    heldDiagonal = new double[n];
+    prescribedDiagonal = new double[n];
     solver = new PcgSolver(solverTolerance, maxIterations, PreconditionerKind.AUTO);
     laws = new LawSources(model, asm);
     coefficients(0.0);
@@ -331,22 +332,22 @@ public final class ThetaStepper {
   /** The mobile amount 1ᵀ M(T(t)) φ plus what the committed law states hold. */
   public double amount(double[] phi, double t) {
     double mobile = dot(coefficients(t).capacityRowSums, phi);
-    return laws.isEmpty() ? mobile : mobile + laws.heldNow(temperatureAt(t));
+    return laws.isEmpty() ? mobile : mobile + laws.trappedNow(temperatureAt(t));
   }
 
-  /** Amount held by the committed source-law states per volume group (zeros without laws). */
-  public double[] heldPerGroup(double t) {
+  /** Amount trapped in the committed source-law states per volume group (zeros without laws). */
+  public double[] trappedPerGroup(double t) {
     return laws.isEmpty()
         ? new double[model.space().mesh().volumeGroups().size()]
-        : laws.heldPerGroup(temperatureAt(t));
+        : laws.trappedPerGroup(temperatureAt(t));
   }
 
-  /** Held amount per m³ at each node from the committed law states (zeros without laws). */
-  public double[] heldField(double t) {
-    return laws.isEmpty() ? new double[n] : laws.heldField(temperatureAt(t));
+  /** Trapped amount per m³ at each node from the committed law states (zeros without laws). */
+  public double[] trappedField(double t) {
+    return laws.isEmpty() ? new double[n] : laws.trappedField(temperatureAt(t));
   }
 
-  /** True when some material carries a source law (the outputs then show the held amount). */
+  /** True when some material carries a source law (the outputs then show the trapped amount). */
   public boolean hasSourceLaws() {
     return !laws.isEmpty();
   }
@@ -370,8 +371,8 @@ public final class ThetaStepper {
 
   /**
    * Sets the prescribed potentials of time t into phi and returns, per face group, the amount that
-   * raising them added: at the start of a run a held face takes in at once what fills the first
-   * layer of elements, and the balance counts it as inflow.
+   * raising them added: at the start of a run a prescribed face takes in at once what fills the
+   * first layer of elements, and the balance counts it as inflow.
    */
   public double[] raise(double[] phi, double t) {
     double[] before = phi.clone();
@@ -403,9 +404,9 @@ public final class ThetaStepper {
   }
 
   /**
-   * The largest potential the boundary data impose (held values and exchange environments, over
-   * their table points, as potentials): the natural scale of the field for step-error control; 0
-   * when only fluxes drive the problem.
+   * The largest potential the boundary data impose (prescribed values and exchange environments,
+   * over their table points, as potentials): the natural scale of the field for step-error control;
+   * 0 when only fluxes drive the problem.
    */
   public double referencePotential() {
     double ref = 0;
@@ -525,7 +526,7 @@ public final class ThetaStepper {
       if (isPrescribed[i]) {
         for (int k = rs[i]; k < rs[i + 1]; k++) {
           if (cols[k] == i) {
-            heldDiagonal[i] = a[k];
+            prescribedDiagonal[i] = a[k];
           } else {
             a[k] = 0.0;
           }
@@ -557,8 +558,9 @@ public final class ThetaStepper {
   }
 
   /**
-   * A copy of the matrix one step solves, M + θ·dt·L(t1) with held rows and columns eliminated
-   * (held rows keep their diagonal): for users who cross-check a solve with another tool.
+   * A copy of the matrix one step solves, M + θ·dt·L(t1) with prescribed rows and columns
+   * eliminated (prescribed rows keep their diagonal): for users who cross-check a solve with
+   * another tool.
    */
   public CsrMatrix systemMatrix(double dt, double theta, double t1) {
     prepareSystem(coefficients(t1), dt, theta, t1);
@@ -644,11 +646,11 @@ public final class ThetaStepper {
     double[][] states = null;
     if (!laws.isEmpty()) {
       states = laws.advance(phi1, t1, dt, kelvin);
-      double heldStart = laws.heldNow(temperatureAt(t0));
-      double heldEnd = laws.held(states, kelvin);
+      double trappedStart = laws.trappedNow(temperatureAt(t0));
+      double trappedEnd = laws.trapped(states, kelvin);
       // net production: what the laws' sources gave the mobile field, less what their states took
-      source += dt * sum(q) + (heldEnd - heldStart);
-      amountEnd += heldEnd;
+      source += dt * sum(q) + (trappedEnd - trappedStart);
+      amountEnd += trappedEnd;
     }
     return new StepOutcome(
         phi1, inflow, source, amountEnd, iterations, solveSeconds, newton, states);
@@ -672,7 +674,10 @@ public final class ThetaStepper {
     return solver.solve(b, phi1).iterations();
   }
 
-  /** The right-hand side of the eliminated system: held rows scaled, held columns moved over. */
+  /**
+   * The right-hand side of the eliminated system: prescribed rows scaled, prescribed columns moved
+   * over.
+   */
   private double[] eliminatedRhs(double[] fullRhs, double[] phi1) {
     double[] phiD = new double[n];
     for (int i = 0; i < n; i++) {
@@ -686,7 +691,7 @@ public final class ThetaStepper {
     }
     double[] b = new double[n];
     for (int i = 0; i < n; i++) {
-      b[i] = isPrescribed[i] ? heldDiagonal[i] * phi1[i] : fullRhs[i] - aDphiD[i];
+      b[i] = isPrescribed[i] ? prescribedDiagonal[i] * phi1[i] : fullRhs[i] - aDphiD[i];
     }
     return b;
   }
@@ -760,7 +765,7 @@ public final class ThetaStepper {
         t1 - dt, dt, NEWTON_MAX_ITERATIONS, norm / Math.max(scale, Double.MIN_NORMAL));
   }
 
-  /** R = A φ − b − dt·q on free rows (0 on held rows) into out; returns ‖R‖₂. */
+  /** R = A φ − b − dt·q on free rows (0 on prescribed rows) into out; returns ‖R‖₂. */
   private double residual(double[] phi, double[] fullRhs, double[] q, double dt, double[] out) {
     unreduced.multiply(phi, out);
     double s = 0;
