@@ -9,7 +9,7 @@ final class ParallelRanges {
    * Default smallest part: below this many items, handing work to another thread costs more than it
    * saves.
    */
-  static final int MIN_PART = 2048;
+  static final int MIN_RANGE = 2048;
 
   /** The work on one part [from, to). */
   interface Body {

@@ -34,7 +34,7 @@ public final class SystemAssembler {
         Objects.requireNonNull(space, "space").mesh().tetCount() < PARALLEL_TETS
             ? 1
             : Runtime.getRuntime().availableProcessors(),
-        ParallelRanges.MIN_PART,
+        ParallelRanges.MIN_RANGE,
         TetColouring.BLOCK);
   }
 

@@ -2,6 +2,7 @@ package dev.soakfield.fem.run;
 
 import dev.soakfield.fem.time.StepListener;
 import dev.soakfield.fem.time.StepOutcome;
+import dev.soakfield.fem.units.DurationText;
 
 /**
  * Stands between the time loop and the recorder: hands every step on, counts accepted and rejected
@@ -38,7 +39,7 @@ final class ProgressRelay implements StepListener {
     progress.step(t, end, steps, rejected);
     log.progress(t, end, steps, rejected);
     if (output) {
-      log.line("output written at t = " + TimeText.of(t));
+      log.line("output written at t = " + DurationText.of(t));
     }
   }
 

@@ -1,5 +1,6 @@
 package dev.soakfield.fem.run;
 
+import dev.soakfield.fem.units.DurationText;
 import java.io.BufferedWriter;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -59,8 +60,8 @@ final class RunLog implements AutoCloseable {
         String.format(
             Locale.ROOT,
             "t = %s of %s (%.1f%%), %d steps, %d rejected, %.1f s elapsed",
-            TimeText.of(t),
-            TimeText.of(end),
+            DurationText.of(t),
+            DurationText.of(end),
             100 * t / end,
             steps,
             rejected,

@@ -28,7 +28,7 @@ public final class SolverBench {
     if (gridN < 8 || gridN > 200) {
       throw new IllegalArgumentException("grid size must lie in [8, 200], got " + gridN);
     }
-    int threads = ParallelParts.partsFor(Integer.MAX_VALUE);
+    int threads = RowSlices.slicesFor(Integer.MAX_VALUE);
     double triad = triadBytesPerSecond(threads);
     out.printf(Locale.ROOT, "STREAM triad, %d threads: %.1f GB/s%n", threads, triad * 1e-9);
     CsrMatrix a = GridLaplacian.build(gridN, 1.0, true);
@@ -90,11 +90,11 @@ public final class SolverBench {
     for (int rep = 0; rep < 8; rep++) {
       double s = 1.0 + rep;
       long t0 = System.nanoTime();
-      ParallelParts.run(
+      RowSlices.run(
           threads,
           p -> {
-            int from = ParallelParts.start(TRIAD_LENGTH, threads, p);
-            int to = ParallelParts.start(TRIAD_LENGTH, threads, p + 1);
+            int from = RowSlices.start(TRIAD_LENGTH, threads, p);
+            int to = RowSlices.start(TRIAD_LENGTH, threads, p + 1);
             for (int i = from; i < to; i++) {
               x[i] = y[i] + s * z[i];
             }

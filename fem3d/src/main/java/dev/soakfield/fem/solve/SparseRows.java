@@ -28,13 +28,13 @@ final class SparseRows {
 
   /** Builds a matrix row by row, rows split over the cores, each part with its own collector. */
   static SparseRows build(int rows, int columns, int entriesPerRowGuess, RowKernel kernel) {
-    int parts = ParallelParts.partsFor(rows);
+    int parts = RowSlices.slicesFor(rows);
     RowCollector[] collectors = new RowCollector[parts];
-    ParallelParts.run(
+    RowSlices.run(
         parts,
         p -> {
-          int from = ParallelParts.start(rows, parts, p);
-          int to = ParallelParts.start(rows, parts, p + 1);
+          int from = RowSlices.start(rows, parts, p);
+          int to = RowSlices.start(rows, parts, p + 1);
           RowCollector out = new RowCollector((to - from) * entriesPerRowGuess, to - from);
           kernel.fill(from, to, out);
           collectors[p] = out;
@@ -48,7 +48,7 @@ final class SparseRows {
     double[] values = new double[total];
     int entry = 0;
     for (int p = 0; p < parts; p++) {
-      collectors[p].copyInto(ParallelParts.start(rows, parts, p), entry, rowStart, cols, values);
+      collectors[p].copyInto(RowSlices.start(rows, parts, p), entry, rowStart, cols, values);
       entry += collectors[p].size();
     }
     return new SparseRows(rows, columns, rowStart, cols, values);
@@ -60,30 +60,22 @@ final class SparseRows {
 
   /** y = S x. */
   void multiply(double[] x, double[] y) {
-    int parts = ParallelParts.partsFor(rows);
-    ParallelParts.run(
+    int parts = RowSlices.slicesFor(rows);
+    RowSlices.run(
         parts,
         p ->
             multiplyRows(
-                x,
-                y,
-                ParallelParts.start(rows, parts, p),
-                ParallelParts.start(rows, parts, p + 1),
-                false));
+                x, y, RowSlices.start(rows, parts, p), RowSlices.start(rows, parts, p + 1), false));
   }
 
   /** y += S x. */
   void multiplyAdd(double[] x, double[] y) {
-    int parts = ParallelParts.partsFor(rows);
-    ParallelParts.run(
+    int parts = RowSlices.slicesFor(rows);
+    RowSlices.run(
         parts,
         p ->
             multiplyRows(
-                x,
-                y,
-                ParallelParts.start(rows, parts, p),
-                ParallelParts.start(rows, parts, p + 1),
-                true));
+                x, y, RowSlices.start(rows, parts, p), RowSlices.start(rows, parts, p + 1), true));
   }
 
   private void multiplyRows(double[] x, double[] y, int from, int to, boolean add) {

@@ -27,7 +27,7 @@ public final class AssemblyBench {
       for (int threads : new int[] {1, cores}) {
         long t0 = System.nanoTime();
         SystemAssembler a =
-            new SystemAssembler(space, threads, ParallelRanges.MIN_PART, TetColouring.BLOCK);
+            new SystemAssembler(space, threads, ParallelRanges.MIN_RANGE, TetColouring.BLOCK);
         double setup = (System.nanoTime() - t0) * 1e-9;
         CsrMatrix m = a.newMatrix();
         double[] tensor = TestMeshes.uniformTensor(mesh, 1, 1, 1, 0, 0, 0);

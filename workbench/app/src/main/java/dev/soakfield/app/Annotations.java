@@ -1,5 +1,6 @@
 package dev.soakfield.app;
 
+import dev.soakfield.fem.units.DurationText;
 import java.util.Locale;
 
 /** Numbers and words for the picture's annotations: scale bar length, values, times. */
@@ -40,17 +41,8 @@ public final class Annotations {
 
   /** A time in seconds in s, min, h or d. */
   public static String time(double s) {
-    double a = Math.abs(s);
-    if (a < 120) {
-      return number(s) + " s";
-    }
-    if (a < 7200) {
-      return number(s / 60) + " min";
-    }
-    if (a < 4 * 86400) {
-      return number(s / 3600) + " h";
-    }
-    return number(s / 86400) + " d";
+    DurationText.Scaled d = DurationText.scaled(s, 4 * 86400);
+    return number(d.value()) + " " + d.unit();
   }
 
   /** Three significant digits, no trailing zeros, exponent form for very large or small. */

@@ -9,7 +9,7 @@ import dev.soakfield.fem.results.ResultFolderException;
 import dev.soakfield.fem.results.RunManifest;
 import dev.soakfield.fem.results.Series;
 import dev.soakfield.fem.run.RunPipeline;
-import dev.soakfield.fem.run.TimeText;
+import dev.soakfield.fem.units.DurationText;
 import dev.soakfield.mesh.AtomicFiles;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -223,7 +223,7 @@ public final class ReportWriter {
 
   private static void groupTables(ReportDocument doc, Series s, TimeAxis axis) throws IOException {
     doc.heading("Amount per volume group");
-    doc.paragraph("At the last recorded time, t = " + TimeText.of(s.last("time")) + ":");
+    doc.paragraph("At the last recorded time, t = " + DurationText.of(s.last("time")) + ":");
     List<List<String>> rows = new ArrayList<>();
     for (String g : s.suffixes("amount:")) {
       rows.add(
@@ -271,7 +271,7 @@ public final class ReportWriter {
                 kind.equals("probes") ? "probe" : "volume group",
                 e.getKey(),
                 v.isNumber()
-                    ? TimeText.of(v.asDouble()) + " (" + num(v.asDouble()) + " s)"
+                    ? DurationText.of(v.asDouble()) + " (" + num(v.asDouble()) + " s)"
                     : "not reached"));
       }
     }
@@ -294,7 +294,7 @@ public final class ReportWriter {
     rows.add(List.of("accepted steps", text(solver.path("steps"))));
     rows.add(List.of("rejected steps", text(solver.path("rejected_steps"))));
     rows.add(List.of("linear solver iterations", text(solver.path("linear_iterations"))));
-    rows.add(List.of("end time", TimeText.of(solver.path("end_time").asDouble(Double.NaN))));
+    rows.add(List.of("end time", DurationText.of(solver.path("end_time").asDouble(Double.NaN))));
     rows.add(List.of("amount at start", num(balance.path("amount_start").asDouble(Double.NaN))));
     rows.add(List.of("amount at end", num(balance.path("amount_end").asDouble(Double.NaN))));
     rows.add(

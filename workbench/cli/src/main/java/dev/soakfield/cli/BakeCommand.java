@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.soakfield.fem.bake.BakeSearch;
 import dev.soakfield.fem.model.LawResolver;
+import dev.soakfield.fem.units.DurationText;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -143,10 +144,10 @@ final class BakeCommand implements Callable<Integer> {
           "bake at %.2f K (%.1f °C): %s brings %s (between %s and %s; %d runs)%n",
           kelvin,
           kelvin - 273.15,
-          Durations.readable(r.time()),
+          DurationText.readable(r.time()),
           target,
-          Durations.readable(r.lowerBound()),
-          Durations.readable(r.time()),
+          DurationText.readable(r.lowerBound()),
+          DurationText.readable(r.time()),
           r.runs());
     } else {
       out.printf(
@@ -155,7 +156,7 @@ final class BakeCommand implements Callable<Integer> {
               + " temperature%n",
           kelvin,
           target,
-          Durations.readable(r.lowerBound()));
+          DurationText.readable(r.lowerBound()));
     }
     out.println("curve (time [h], value):");
     int stride = Math.max(1, r.curveTimes().length / 20);

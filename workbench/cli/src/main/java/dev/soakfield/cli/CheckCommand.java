@@ -11,7 +11,7 @@ import dev.soakfield.fem.casefile.TimeTable;
 import dev.soakfield.fem.run.MemoryEstimate;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunTimeEstimate;
-import dev.soakfield.fem.run.TimeText;
+import dev.soakfield.fem.units.DurationText;
 import dev.soakfield.mesh.FaceGroup;
 import dev.soakfield.mesh.FaceGroupKind;
 import dev.soakfield.mesh.TetMesh;
@@ -105,7 +105,7 @@ final class CheckCommand implements Callable<Integer> {
     sb.append("outputs: fields at ");
     List<String> times = new ArrayList<>();
     for (double t : c.time().outputTimes()) {
-      times.add(TimeText.of(t));
+      times.add(DurationText.of(t));
     }
     sb.append(String.join(", ", times)).append("; series.csv every step");
     if (!c.probes().isEmpty()) {
@@ -135,7 +135,7 @@ final class CheckCommand implements Callable<Integer> {
             Locale.ROOT,
             "time: roughly %s of wall time for ~%d steps (an order-of-magnitude estimate from"
                 + " the step count and a measured cost per node and step)%n",
-            TimeText.of(est.seconds()),
+            DurationText.of(est.seconds()),
             est.steps()));
     for (String w : p.warnings()) {
       sb.append("warning: ").append(w).append('\n');
@@ -146,7 +146,7 @@ final class CheckCommand implements Callable<Integer> {
   private static String time(CaseSpec c) {
     String steps;
     if (c.time().steps() instanceof StepControl.Fixed f) {
-      steps = "fixed steps of " + TimeText.of(f.step());
+      steps = "fixed steps of " + DurationText.of(f.step());
     } else {
       StepControl.Adaptive a = (StepControl.Adaptive) c.time().steps();
       steps = "adaptive steps (tolerance " + num(a.tolerance()) + ")";
@@ -154,7 +154,7 @@ final class CheckCommand implements Callable<Integer> {
     return String.format(
         Locale.ROOT,
         "time: 0 to %s (%s s), %s, %s, %s capacity%n",
-        TimeText.of(c.time().end()),
+        DurationText.of(c.time().end()),
         num(c.time().end()),
         c.time().scheme().word(),
         steps,

@@ -4,7 +4,7 @@ import dev.soakfield.fem.assembly.CsrMatrix;
 import dev.soakfield.fem.casefile.TimeScheme;
 import dev.soakfield.fem.results.ResultFiles;
 import dev.soakfield.fem.results.Series;
-import dev.soakfield.fem.run.RebuiltRun;
+import dev.soakfield.fem.run.ModelFromResults;
 import dev.soakfield.fem.time.TimeSettings;
 import dev.soakfield.mesh.AtomicFiles;
 import java.io.IOException;
@@ -130,7 +130,7 @@ final class ExportCommand implements Callable<Integer> {
           dir + "/series.csv: found no step after t = 0, expected at least one step");
     }
     int k = stepIndex(t, time == null ? OptionalDouble.empty() : OptionalDouble.of(time));
-    RebuiltRun run = RebuiltRun.from(dir);
+    ModelFromResults run = ModelFromResults.from(dir);
     double dt = t[k] - t[k - 1];
     // Crank-Nicolson runs start with backward-Euler steps; restarts after breakpoints are not
     // recorded in the series, so later steps are taken as theta = 1/2

@@ -1,7 +1,7 @@
 package dev.soakfield.cli;
 
 import dev.soakfield.fem.run.RunProgress;
-import dev.soakfield.fem.run.TimeText;
+import dev.soakfield.fem.units.DurationText;
 import java.io.PrintWriter;
 import java.util.Locale;
 
@@ -59,13 +59,13 @@ final class ProgressLine implements RunProgress {
     return String.format(
         Locale.ROOT,
         "soakfield: t = %s of %s (%.0f%%), %d steps, %d rejected, %s elapsed, ETA %s%n",
-        TimeText.of(time),
-        TimeText.of(endTime),
+        DurationText.of(time),
+        DurationText.of(endTime),
         100 * time / endTime,
         steps,
         rejected,
-        TimeText.of(elapsed),
-        TimeText.of(etaSeconds(time, endTime, elapsed)));
+        DurationText.of(elapsed),
+        DurationText.of(etaSeconds(time, endTime, elapsed)));
   }
 
   String bar(double time, double endTime, int steps, int rejected, double elapsed) {
@@ -78,11 +78,11 @@ final class ProgressLine implements RunProgress {
         "#".repeat(filled),
         ".".repeat(BAR_WIDTH - filled),
         100 * f,
-        TimeText.of(time),
-        TimeText.of(endTime),
+        DurationText.of(time),
+        DurationText.of(endTime),
         steps,
         rejected,
-        TimeText.of(etaSeconds(time, endTime, elapsed)));
+        DurationText.of(etaSeconds(time, endTime, elapsed)));
   }
 
   void done() {
@@ -96,7 +96,7 @@ final class ProgressLine implements RunProgress {
       err.printf(
           Locale.ROOT,
           "soakfield: finished in %s%n",
-          TimeText.of((System.nanoTime() - start) / 1e9));
+          DurationText.of((System.nanoTime() - start) / 1e9));
     }
     err.flush();
   }

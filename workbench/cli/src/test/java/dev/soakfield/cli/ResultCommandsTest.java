@@ -8,7 +8,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.soakfield.fem.assembly.CsrMatrix;
 import dev.soakfield.fem.results.Series;
-import dev.soakfield.fem.run.RebuiltRun;
+import dev.soakfield.fem.run.ModelFromResults;
 import java.io.Reader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -129,7 +129,7 @@ class ResultCommandsTest {
     while (t[k] < 3600) {
       k++;
     }
-    CsrMatrix a = RebuiltRun.from(out).stepper().systemMatrix(t[k] - t[k - 1], 1.0, t[k]);
+    CsrMatrix a = ModelFromResults.from(out).stepper().systemMatrix(t[k] - t[k - 1], 1.0, t[k]);
     // MTJ's Matrix Market reader (a general-purpose library) parses the header and entries
     try (Reader in = Files.newBufferedReader(mtx, StandardCharsets.UTF_8)) {
       MatrixVectorReader reader = new MatrixVectorReader(in);

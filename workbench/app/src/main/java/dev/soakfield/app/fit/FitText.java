@@ -1,6 +1,7 @@
 package dev.soakfield.app.fit;
 
 import dev.soakfield.fem.fit.Estimate;
+import dev.soakfield.fem.units.DurationText;
 import dev.soakfield.fem.units.SiValue;
 import dev.soakfield.fem.units.UnitException;
 
@@ -23,13 +24,8 @@ final class FitText {
 
   /** A duration in s, min or h, whichever reads best. */
   static String time(double s) {
-    if (s < 120) {
-      return SiValue.formatNumber(s) + " s";
-    }
-    if (s < 7200) {
-      return SiValue.formatNumber(s / 60) + " min";
-    }
-    return SiValue.formatNumber(s / 3600) + " h";
+    DurationText.Scaled d = DurationText.scaled(s, Double.POSITIVE_INFINITY);
+    return SiValue.formatNumber(d.value()) + " " + d.unit();
   }
 
   static String interval(Estimate e, String siUnit) {

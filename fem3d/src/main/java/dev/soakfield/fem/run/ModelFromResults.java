@@ -25,13 +25,14 @@ import java.util.List;
  * @param model the model built from both
  * @param stepper the stepper with the case's capacity form
  */
-public record RebuiltRun(CaseSpec spec, TetMesh mesh, DiffusionModel model, ThetaStepper stepper) {
+public record ModelFromResults(
+    CaseSpec spec, TetMesh mesh, DiffusionModel model, ThetaStepper stepper) {
   /**
    * Rebuilds the run recorded in {@code folder}.
    *
    * @throws ResultFolderException when the folder lacks its case or mesh copy
    */
-  public static RebuiltRun from(Path folder) {
+  public static ModelFromResults from(Path folder) {
     Path caseCopy = folder.resolve(RunPipeline.CASE_COPY);
     Path meshCopy = folder.resolve(RunPipeline.MESH_COPY);
     for (Path p : List.of(caseCopy, meshCopy)) {
@@ -72,6 +73,6 @@ public record RebuiltRun(CaseSpec spec, TetMesh mesh, DiffusionModel model, Thet
     ThetaStepper stepper =
         new ThetaStepper(
             model, lumped, RunPipeline.SOLVER_TOLERANCE, RunPipeline.SOLVER_MAX_ITERATIONS);
-    return new RebuiltRun(spec, mesh, model, stepper);
+    return new ModelFromResults(spec, mesh, model, stepper);
   }
 }
