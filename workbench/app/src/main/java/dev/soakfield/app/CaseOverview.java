@@ -1,0 +1,197 @@
+package dev.soakfield.app;
+
+import dev.soakfield.fem.casefile.CaseSpec;
+import dev.soakfield.fem.casefile.Diffusivity;
+import dev.soakfield.fem.casefile.FaceSpec;
+import dev.soakfield.fem.casefile.MaterialSpec;
+import dev.soakfield.fem.casefile.ProbeSpec;
+import dev.soakfield.fem.casefile.SourceSpec;
+import dev.soakfield.fem.casefile.StepControl;
+import dev.soakfield.fem.casefile.TimeTable;
+import dev.soakfield.fem.run.MemoryEstimate;
+import dev.soakfield.fem.run.RunPipeline;
+import dev.soakfield.fem.run.RunTimeEstimate;
+import dev.soakfield.fem.units.DurationText;
+import dev.soakfield.mesh.FaceGroup;
+import dev.soakfield.mesh.FaceGroupKind;
+import dev.soakfield.mesh.TetMesh;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * What a checked case will run, as text: mesh and element order, each part's material, each face
+ * group's face kind (exterior groups without an entry are sealed and listed), time span and step
+ * control, outputs and probes, and the memory and time estimates. {@code soakfield check} prints
+ * it.
+ */
+public final class CaseOverview {
+  private CaseOverview() {}
+
+  /**
+   * The overview of a checked case and its mesh.
+   *
+   * @param maxHeap the heap the run will have, for the memory line
+   */
+  public static String of(RunPipeline.Prepared p, long maxHeap) {
+    CaseSpec c = p.spec();
+    TetMesh mesh = p.mesh();
+    StringBuilder sb = new StringBuilder();
+    sb.append("case ").append(c.caseFile()).append(": no problems found\n");
+    sb.append(
+        String.format(
+            Locale.ROOT,
+            "mesh %s: %d nodes, %d tetrahedra; elements %s (%d-node)%n",
+            c.mesh(),
+            mesh.nodeCount(),
+            mesh.tetCount(),
+            mesh.order() == 2 ? "quadratic" : "linear",
+            mesh.nodesPerTet()));
+    sb.append("materials:\n");
+    for (MaterialSpec m : c.materials().values()) {
+      sb.append(
+          String.format(
+              Locale.ROOT,
+              "  %-16s D = %s, S = %s, source %s%n",
+              m.volumeGroup(),
+              diffusivity(m.diffusivity()),
+              num(m.solubility()),
+              source(m.source())));
+    }
+    sb.append("face groups:\n");
+    List<String> unassigned = new ArrayList<>();
+    for (FaceGroup g : mesh.faceGroups()) {
+      FaceSpec f = c.faces().get(g.name());
+      String where = g.kind() == FaceGroupKind.EXTERIOR ? "exterior" : "interface";
+      String what;
+      if (f != null) {
+        what = faceKind(f);
+      } else if (g.kind() == FaceGroupKind.EXTERIOR) {
+        what = "sealed (no entry in faces: sealed by default)";
+        unassigned.add(g.name());
+      } else {
+        what = "continuous (material interface)";
+      }
+      sb.append(String.format(Locale.ROOT, "  %-16s %-9s %s%n", g.name(), where, what));
+    }
+    if (!unassigned.isEmpty()) {
+      sb.append("  unassigned exterior groups, sealed: ")
+          .append(String.join(", ", unassigned))
+          .append('\n');
+    }
+    sb.append(time(c));
+    sb.append("outputs: fields at ");
+    List<String> times = new ArrayList<>();
+    for (double t : c.time().outputTimes()) {
+      times.add(DurationText.of(t));
+    }
+    sb.append(String.join(", ", times)).append("; series.csv every step");
+    if (!c.probes().isEmpty()) {
+      List<String> names = new ArrayList<>();
+      for (ProbeSpec pr : c.probes()) {
+        names.add(pr.name());
+      }
+      sb.append("; probes ").append(String.join(", ", names));
+    }
+    if (c.threshold().isPresent()) {
+      sb.append("; threshold ").append(num(c.threshold().getAsDouble()));
+    }
+    sb.append('\n');
+    MemoryEstimate mem = MemoryEstimate.of(mesh, mesh.order());
+    sb.append(
+        String.format(
+            Locale.ROOT,
+            "memory: about %s of Java heap needed, %s available%s%n",
+            MemoryEstimate.megabytes(mem.bytes()),
+            MemoryEstimate.megabytes(maxHeap),
+            mem.bytes() > maxHeap
+                ? " - TOO SMALL: 'run' will refuse; raise it with JAVA_OPTS=-Xmx..."
+                : ""));
+    RunTimeEstimate est = RunTimeEstimate.of(c, mesh);
+    sb.append(
+        String.format(
+            Locale.ROOT,
+            "time: roughly %s of wall time for ~%d steps (an order-of-magnitude estimate from"
+                + " the step count and a measured cost per node and step)%n",
+            DurationText.of(est.seconds()),
+            est.steps()));
+    for (String w : p.warnings()) {
+      sb.append("warning: ").append(w).append('\n');
+    }
+    return sb.toString();
+  }
+
+  private static String time(CaseSpec c) {
+    String steps;
+    if (c.time().steps() instanceof StepControl.Fixed f) {
+      steps = "fixed steps of " + DurationText.of(f.step());
+    } else {
+      StepControl.Adaptive a = (StepControl.Adaptive) c.time().steps();
+      steps = "adaptive steps (tolerance " + num(a.tolerance()) + ")";
+    }
+    return String.format(
+        Locale.ROOT,
+        "time: 0 to %s (%s s), %s, %s, %s capacity%n",
+        DurationText.of(c.time().end()),
+        num(c.time().end()),
+        c.time().scheme().word(),
+        steps,
+        c.time().capacity().word());
+  }
+
+  private static String faceKind(FaceSpec f) {
+    String value = table(f.value());
+    return switch (f.kind()) {
+      case SEALED -> "sealed";
+      case CONCENTRATION -> "concentration " + value;
+      case FLUX -> "flux " + value + " amount/(m²·s)";
+      case EXCHANGE ->
+          "exchange with environment "
+              + (f.ambientValue() ? "ambient" : value)
+              + ", coefficient "
+              + table(f.coefficient())
+              + " m/s";
+      case AMBIENT -> "ambient (the exposure's humidity or gas pressure)";
+    };
+  }
+
+  private static String table(TimeTable t) {
+    if (t.isConstant()) {
+      return num(t.at(0));
+    }
+    return "table of " + t.breakpoints().length + " points";
+  }
+
+  private static String diffusivity(Diffusivity d) {
+    if (d.isIsotropic()) {
+      return num(d.xx()) + " m²/s";
+    }
+    return "tensor ["
+        + num(d.xx())
+        + ", "
+        + num(d.yy())
+        + ", "
+        + num(d.zz())
+        + "; "
+        + num(d.xy())
+        + ", "
+        + num(d.yz())
+        + ", "
+        + num(d.zx())
+        + "] m²/s";
+  }
+
+  private static String source(SourceSpec s) {
+    if (s instanceof SourceSpec.ConstantRate r) {
+      return "constant " + num(r.rate()) + " amount/(m³·s)";
+    }
+    if (s instanceof SourceSpec.FirstOrder r) {
+      return "first-order " + num(r.rate()) + " 1/s";
+    }
+    return s.kind();
+  }
+
+  private static String num(double v) {
+    return String.format(Locale.ROOT, "%.4g", v);
+  }
+}
