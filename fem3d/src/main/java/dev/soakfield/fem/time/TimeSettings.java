@@ -24,6 +24,14 @@ public record TimeSettings(
   /** Backward-Euler steps before Crank–Nicolson takes over: they damp the start-up jump. */
   public static final int START_STEPS = 2;
 
+  /**
+   * The θ of a step: 1/2 under Crank–Nicolson once {@link #START_STEPS} backward-Euler steps have
+   * been taken since the start or the last restart, else 1.
+   */
+  public static double thetaOfStep(boolean crankNicolson, int stepsSinceRestart) {
+    return crankNicolson && stepsSinceRestart >= START_STEPS ? 0.5 : 1.0;
+  }
+
   public TimeSettings {
     outputs = outputs.clone();
     if (!(end > 0)) {

@@ -95,10 +95,10 @@ public final class TransientRun {
       // never longer than dt (so a rejection always shortens the try), and no sliver before the
       // target: a remainder up to 1.25 dt is taken in two equal steps
       double tryDt = remaining <= dt ? remaining : remaining <= 1.25 * dt ? remaining / 2 : dt;
-      boolean crank = s.crankNicolson() && sinceRestart >= TimeSettings.START_STEPS;
+      double theta = TimeSettings.thetaOfStep(s.crankNicolson(), sinceRestart);
       StepOutcome out;
       try {
-        out = stepper.step(phi, t, tryDt, crank ? 0.5 : 1.0);
+        out = stepper.step(phi, t, tryDt, theta);
       } catch (StepNotConvergedException e) {
         // a nonlinear step that does not converge is retried a quarter as long
         rejected++;

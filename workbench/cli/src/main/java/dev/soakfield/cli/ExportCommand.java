@@ -36,7 +36,7 @@ import picocli.CommandLine.Spec;
     description = {
       "Exports from a result folder: --csv the series and probe data with units in the header"
           + " (c is the concentration unit of the case: amounts are c*m^3); --mtx the matrix"
-          + " M + theta*dt*L(t1) of one step (held rows and columns eliminated) in Matrix Market"
+          + " M + theta*dt*L(t1) of one step (prescribed rows and columns eliminated) in Matrix Market"
           + " coordinate format, rebuilt from the folder's case.json and mesh.msh."
     })
 final class ExportCommand implements Callable<Integer> {
@@ -132,16 +132,14 @@ final class ExportCommand implements Callable<Integer> {
     int k = stepIndex(t, time == null ? OptionalDouble.empty() : OptionalDouble.of(time));
     ModelFromResults run = ModelFromResults.from(dir);
     double dt = t[k] - t[k - 1];
-    // Crank-Nicolson runs start with backward-Euler steps; restarts after breakpoints are not
-    // recorded in the series, so later steps are taken as theta = 1/2
+    // step k follows k - 1 steps; restarts after breakpoints are not recorded in the series, so
+    // the count runs from the start
     double theta =
-        run.spec().time().scheme() == TimeScheme.CRANK_NICOLSON && k > TimeSettings.START_STEPS
-            ? 0.5
-            : 1.0;
+        TimeSettings.thetaOfStep(run.spec().time().scheme() == TimeScheme.CRANK_NICOLSON, k - 1);
     CsrMatrix a = run.stepper().systemMatrix(dt, theta, t[k]);
     List<String> comments =
         List.of(
-            "Soakfield system matrix M + theta*dt*L(t1), held rows and columns eliminated",
+            "Soakfield system matrix M + theta*dt*L(t1), prescribed rows and columns eliminated",
             "result folder " + dir.toAbsolutePath(),
             String.format(
                 Locale.ROOT,
