@@ -1,14 +1,11 @@
 package dev.soakfield.report;
 
-import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.node.MissingNode;
 import dev.soakfield.fem.results.ResultFiles;
 import dev.soakfield.fem.results.ResultFolderException;
 import dev.soakfield.fem.results.RunManifest;
 import dev.soakfield.fem.results.Series;
-import dev.soakfield.fem.run.RunPipeline;
+import dev.soakfield.fem.results.SummaryFile;
 import dev.soakfield.fem.units.DurationText;
 import dev.soakfield.mesh.AtomicFiles;
 import java.io.IOException;
@@ -96,8 +93,8 @@ public final class ReportWriter {
   }
 
   static ReportDocument build(Path folder, RunManifest manifest) throws IOException {
-    JsonNode summary = json(folder.resolve(ResultFiles.SUMMARY));
-    JsonNode kase = json(folder.resolve(RunPipeline.CASE_COPY));
+    JsonNode summary = SummaryFile.readOrMissing(folder);
+    JsonNode kase = SummaryFile.caseCopyOrMissing(folder);
     Path seriesFile = folder.resolve(ResultFiles.SERIES);
     Optional<Series> series =
         Files.isRegularFile(seriesFile) ? Optional.of(Series.read(seriesFile)) : Optional.empty();
@@ -338,19 +335,6 @@ public final class ReportWriter {
     for (Path p : pngs) {
       String name = p.getFileName().toString();
       doc.picture(PICTURES + "/" + name, name, Files.readAllBytes(p));
-    }
-  }
-
-  private static JsonNode json(Path file) {
-    if (!Files.isRegularFile(file)) {
-      return MissingNode.getInstance();
-    }
-    try {
-      ObjectMapper mapper = new ObjectMapper();
-      mapper.enable(JsonParser.Feature.ALLOW_COMMENTS);
-      return mapper.readTree(file.toFile());
-    } catch (IOException e) {
-      return MissingNode.getInstance();
     }
   }
 
