@@ -1,5 +1,6 @@
 package dev.soakfield.cli;
 
+import dev.soakfield.fem.results.ResultFiles;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunSummary;
 import dev.soakfield.report.ReportWriter;
@@ -60,8 +61,13 @@ final class DemoCommand implements Callable<Integer> {
     progress.done();
     ReportWriter.write(s.outputFolder());
     RunCommand.report(o, s);
-    o.println("open " + s.outputFolder().resolve("fields.pvd") + " in a VTK viewer, or read");
-    o.println("  " + s.outputFolder().resolve("series.csv") + " and summary.json beside it");
+    o.println("open " + s.outputFolder().resolve(ResultFiles.FIELDS) + " in a VTK viewer, or read");
+    o.println(
+        "  "
+            + s.outputFolder().resolve(ResultFiles.SERIES)
+            + " and "
+            + ResultFiles.SUMMARY
+            + " beside it");
     o.flush();
     return ExitCodes.OK;
   }

@@ -8,6 +8,7 @@ import dev.soakfield.app.Study;
 import dev.soakfield.app.ViewSettings;
 import dev.soakfield.fem.post.Isosurface;
 import dev.soakfield.fem.post.TriangleSoup;
+import dev.soakfield.fem.results.ResultFiles;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.gen.StructuredMesher;
 import dev.soakfield.mesh.msh.MshWriter;
@@ -225,7 +226,7 @@ public final class RenderBench {
     TetMesh mesh = StructuredMesher.box(0.02, 0.02, 0.02, cells, cells, cells, 1);
     Path folder = dir.resolve("results");
     Files.createDirectories(folder.resolve("fields"));
-    MshWriter.write(folder.resolve("mesh.msh"), mesh, true);
+    MshWriter.write(folder.resolve(ResultFiles.MESH_COPY), mesh, true);
     List<PvdEntry> entries = new ArrayList<>();
     double[] times = {3600, 7200};
     for (int f = 0; f < 2; f++) {
@@ -245,7 +246,7 @@ public final class RenderBench {
           false);
       entries.add(new PvdEntry(times[f], name));
     }
-    PvdWriter.write(folder.resolve("fields.pvd"), entries);
+    PvdWriter.write(folder.resolve(ResultFiles.FIELDS), entries);
     return folder;
   }
 
