@@ -1,6 +1,8 @@
 package dev.soakfield.fem.results;
 
+import dev.soakfield.mesh.AtomicFiles;
 import java.io.IOException;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -195,5 +197,34 @@ public final class Series {
           default -> "";
         };
     return unit.isEmpty() ? name : name + " [" + unit + "]";
+  }
+
+  /**
+   * Copies series.csv to {@code csv} with each column's unit in its header; returns the rows.
+   *
+   * @throws ResultFolderException when a cell of the series is no number (line and column)
+   */
+  public static int copyWithUnits(Path series, Path csv) throws IOException {
+    Series.read(series); // a bad cell is refused here, with its line and column, before writing
+    List<String> lines = Files.readAllLines(series, StandardCharsets.UTF_8);
+    List<String> header = Series.split(lines.get(0));
+    List<String> named = new ArrayList<>();
+    for (String h : header) {
+      String u = withUnit(h);
+      named.add(u.contains(",") || u.contains("\"") ? "\"" + u.replace("\"", "\"\"") + "\"" : u);
+    }
+    AtomicFiles.write(
+        csv,
+        f -> {
+          try (Writer w = Files.newBufferedWriter(f, StandardCharsets.UTF_8)) {
+            w.write(String.join(",", named));
+            w.write('\n');
+            for (int i = 1; i < lines.size(); i++) {
+              w.write(lines.get(i));
+              w.write('\n');
+            }
+          }
+        });
+    return lines.size() - 1;
   }
 }

@@ -1,20 +1,15 @@
 package dev.soakfield.cli;
 
+import dev.soakfield.app.CaseRun;
 import dev.soakfield.fem.laws.PluginFolders;
 import dev.soakfield.fem.laws.SourceLawCatalog;
 import dev.soakfield.fem.run.RunOptions;
-import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunSummary;
-import dev.soakfield.fem.solve.SolverStalledException;
-import dev.soakfield.fem.time.RunFailedException;
-import dev.soakfield.report.FieldPictures;
-import dev.soakfield.report.ReportWriter;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -114,24 +109,18 @@ final class RunCommand implements Callable<Integer> {
             .withLaws(laws.resolver())
             .withCheckpoints(checkpointSteps, checkpointSeconds)
             .withResume(resume);
-    RunSummary s;
+    CaseRun.Outcome outcome;
     try {
-      s = RunPipeline.run(caseFile, out, progress, options);
-    } catch (RunFailedException | SolverStalledException e) {
-      // the folder says "failed" and holds what was complete: a report of that part helps
+      outcome = CaseRun.run(caseFile, out, progress, options);
+    } finally {
       progress.done();
-      ReportWriter.write(out);
-      throw e;
     }
-    progress.done();
-    Optional<String> noPictures = FieldPictures.draw(s.outputFolder());
-    if (noPictures.isPresent() && !quiet) {
-      err.println("note: the report has no field picture: " + noPictures.get());
+    if (outcome.noPictures().isPresent() && !quiet) {
+      err.println("note: the report has no field picture: " + outcome.noPictures().get());
       err.flush();
     }
-    ReportWriter.write(s.outputFolder());
     if (!quiet) {
-      report(spec.commandLine().getOut(), s);
+      report(spec.commandLine().getOut(), outcome.summary());
     }
     return ExitCodes.OK;
   }

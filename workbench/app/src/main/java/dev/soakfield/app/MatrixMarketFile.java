@@ -1,4 +1,4 @@
-package dev.soakfield.cli;
+package dev.soakfield.app;
 
 import dev.soakfield.fem.assembly.CsrMatrix;
 import java.io.BufferedWriter;
@@ -11,7 +11,7 @@ import java.util.Locale;
  * A sparse matrix in the Matrix Market coordinate format: "real symmetric" (entries on and below
  * the diagonal) when the matrix is symmetric to round-off, "real general" otherwise; 1-based.
  */
-final class MatrixMarketFile {
+public final class MatrixMarketFile {
   /** Relative asymmetry up to which a matrix counts as symmetric (round-off of the assembly). */
   static final double SYMMETRY_TOLERANCE = 1e-12;
 
@@ -42,7 +42,7 @@ final class MatrixMarketFile {
   }
 
   /** Writes {@code a} with the comment lines {@code comments}; returns the entries written. */
-  static long write(Writer w, CsrMatrix a, List<String> comments) throws IOException {
+  public static long write(Writer w, CsrMatrix a, List<String> comments) throws IOException {
     boolean symmetric = isSymmetric(a);
     int[] start = a.rowStart();
     int[] cols = a.cols();

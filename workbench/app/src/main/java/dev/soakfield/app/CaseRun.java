@@ -1,0 +1,50 @@
+package dev.soakfield.app;
+
+import dev.soakfield.fem.run.RunOptions;
+import dev.soakfield.fem.run.RunPipeline;
+import dev.soakfield.fem.run.RunProgress;
+import dev.soakfield.fem.run.RunSummary;
+import dev.soakfield.fem.solve.SolverStalledException;
+import dev.soakfield.fem.time.RunFailedException;
+import dev.soakfield.report.FieldPictures;
+import dev.soakfield.report.ReportWriter;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.Optional;
+
+/**
+ * A whole analysis of a case, as the command line and the window run it: the run, then the field
+ * pictures and the report. A run that fails numerically still gets a report of what it completed.
+ */
+public final class CaseRun {
+  private CaseRun() {}
+
+  /**
+   * What came of a finished run.
+   *
+   * @param summary the run's figures
+   * @param noPictures why the report has no field pictures, when it has none
+   */
+  public record Outcome(RunSummary summary, Optional<String> noPictures) {}
+
+  /**
+   * Runs the case into {@code out} and writes its report.
+   *
+   * @throws RunFailedException or {@link SolverStalledException} when the run cannot go on (the
+   *     folder is marked failed and its report written)
+   */
+  public static Outcome run(Path caseFile, Path out, RunProgress progress, RunOptions options)
+      throws IOException {
+    RunSummary s;
+    try {
+      s = RunPipeline.run(caseFile, out, progress, options);
+    } catch (RunFailedException | SolverStalledException e) {
+      // the folder says "failed" and holds what was complete: a report of that part helps
+      ReportWriter.write(out);
+      throw e;
+    }
+    Optional<String> noPictures = FieldPictures.draw(s.outputFolder());
+    ReportWriter.write(s.outputFolder());
+    return new Outcome(s, noPictures);
+  }
+}
