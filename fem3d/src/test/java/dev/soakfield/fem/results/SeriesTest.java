@@ -60,4 +60,40 @@ class SeriesTest {
     assertTrue(e.getMessage().contains("no column 'temperature'"), e.getMessage());
     assertTrue(e.getMessage().contains("[time, amount]"), e.getMessage());
   }
+
+  @Test
+  void aCopyWithUnitsNamesEachColumnsUnitAndKeepsTheRows() throws IOException {
+    Path f =
+        Files.writeString(
+            dir.resolve("series.csv"),
+            "time,amount,amount:body,probe:core,inflow_rate:xmin,new_column\n0,0,0,0,0,1\n"
+                + "10,0.5,0.5,0.25,0.05,2\n");
+    Path csv = dir.resolve("out.csv");
+    assertEquals(2, Series.copyWithUnits(f, csv));
+    List<String> lines = Files.readAllLines(csv);
+    assertEquals(
+        "time [s],amount [c*m^3],amount:body [c*m^3],probe:core [c],"
+            + "inflow_rate:xmin [c*m^3/s],new_column",
+        lines.get(0));
+    assertEquals("10,0.5,0.5,0.25,0.05,2", lines.get(2));
+  }
+
+  @Test
+  void aCopyOfASeriesWithABadCellIsRefusedBeforeAnythingIsWritten() throws IOException {
+    Path f = Files.writeString(dir.resolve("series.csv"), "time,amount\n0,zero\n");
+    Path csv = dir.resolve("out.csv");
+    assertThrows(ResultFolderException.class, () -> Series.copyWithUnits(f, csv));
+    assertTrue(Files.notExists(csv));
+  }
+
+  @Test
+  void summaryAndCaseCopyReadAsMissingWhenAbsentOrBroken() throws IOException {
+    assertTrue(SummaryFile.readOrMissing(dir).isMissingNode());
+    Files.writeString(dir.resolve(ResultFiles.SUMMARY), "{ broken");
+    assertTrue(SummaryFile.readOrMissing(dir).isMissingNode());
+    SummaryFile.write(dir, java.util.Map.of("law", "plain"));
+    assertEquals("plain", SummaryFile.readOrMissing(dir).path("law").asText());
+    Files.writeString(dir.resolve(ResultFiles.CASE_COPY), "{ // a comment\n \"initial\": 0.5 }");
+    assertEquals(0.5, SummaryFile.caseCopyOrMissing(dir).path("initial").asDouble());
+  }
 }
