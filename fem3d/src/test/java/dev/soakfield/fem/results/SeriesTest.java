@@ -66,8 +66,11 @@ class SeriesTest {
     Path f =
         Files.writeString(
             dir.resolve("series.csv"),
-            "time,amount,amount:body,probe:core,inflow_rate:xmin,new_column\n0,0,0,0,0,1\n"
-                + "10,0.5,0.5,0.25,0.05,2\n");
+            """
+            time,amount,amount:body,probe:core,inflow_rate:xmin,new_column
+            0,0,0,0,0,1
+            10,0.5,0.5,0.25,0.05,2
+            """);
     Path csv = dir.resolve("out.csv");
     assertEquals(2, Series.copyWithUnits(f, csv));
     List<String> lines = Files.readAllLines(csv);
