@@ -7,7 +7,7 @@ import java.util.Objects;
  * The boundary condition on one face group.
  *
  * @param faceGroup the mesh's face group
- * @param kind the partition
+ * @param kind the face kind
  * @param value concentration (CONCENTRATION), inward flux in amount/(m²·s) (FLUX) or environment
  *     concentration (EXCHANGE); the constant 0 for SEALED
  * @param coefficient transfer coefficient h in m/s for EXCHANGE; the constant 0 for every other

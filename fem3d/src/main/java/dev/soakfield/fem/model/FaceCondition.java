@@ -20,7 +20,7 @@ public final class FaceCondition {
    *
    * @param group face group index in the mesh
    * @param name face group name
-   * @param kind the partition
+   * @param kind the face kind
    * @param value concentration (CONCENTRATION; EXCHANGE: c_env) or inward flux (FLUX)
    * @param coefficient surface transfer coefficient h in m/s (EXCHANGE only)
    * @param faces the mesh's face indices of the group

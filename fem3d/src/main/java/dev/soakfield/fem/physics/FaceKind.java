@@ -1,6 +1,6 @@
 package dev.soakfield.fem.physics;
 
-/** The partition a face group belongs to. */
+/** The kind of condition on a face group: concentration, flux, exchange, sealed or ambient. */
 public enum FaceKind {
   /** Prescribed concentration in the adjacent material (Dirichlet). */
   CONCENTRATION("concentration"),

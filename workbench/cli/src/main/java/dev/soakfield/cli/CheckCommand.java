@@ -21,7 +21,7 @@ import picocli.CommandLine.Spec;
       "Checks a case file and its mesh without solving. Every problem is listed at once with its"
           + " line, column and key path, with a close match for misspelt keys and group names"
           + " (exit code 2).",
-      "A good case prints what will run: face groups and their partitions, materials, time span,"
+      "A good case prints what will run: face groups and their face kinds, materials, time span,"
           + " outputs, element order, mesh size, memory and time estimates (exit code 0)."
     })
 final class CheckCommand implements Callable<Integer> {
