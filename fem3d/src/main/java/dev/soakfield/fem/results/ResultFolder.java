@@ -259,9 +259,12 @@ public final class ResultFolder {
   /** Removes the earlier run's files this run did not replace (stale frames, old logs). */
   private void dropEarlier(List<String> kept) throws IOException {
     Set<String> keep = new HashSet<>(kept);
+    Path root = target.toAbsolutePath().normalize();
     for (String name : earlierFiles) {
-      if (!keep.contains(name) && !name.contains("..")) {
-        Files.deleteIfExists(target.resolve(name));
+      Path earlier = root.resolve(name).normalize();
+      // the manifest reader refuses names outside the folder; this keeps a delete inside it anyway
+      if (!keep.contains(name) && earlier.startsWith(root) && !earlier.equals(root)) {
+        Files.deleteIfExists(earlier);
       }
     }
   }

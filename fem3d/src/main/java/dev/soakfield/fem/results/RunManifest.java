@@ -163,7 +163,10 @@ public record RunManifest(
     try {
       JsonNode root = new ObjectMapper().readTree(file.toFile());
       List<String> files = new ArrayList<>();
-      root.path("files").forEach(n -> files.add(n.asText()));
+      int index = 0;
+      for (JsonNode n : root.path("files")) {
+        files.add(insideName(file, index++, n.asText()));
+      }
       return Optional.of(
           new RunManifest(
               Path.of(text(root, "case", file)),
@@ -180,6 +183,38 @@ public record RunManifest(
       throw new ResultFolderException(
           file + ": found a manifest that is not valid JSON (" + e.getMessage() + ")", e);
     }
+  }
+
+  /**
+   * A file entry as a name inside the folder ("fields/c_0001.vtu"). A later run deletes the files
+   * of an earlier one it does not replace, so an entry that leaves the folder (absolute, "..", a
+   * drive) is refused, never followed.
+   */
+  private static String insideName(Path file, int index, String name) {
+    boolean inside;
+    try {
+      Path p = Path.of(name);
+      inside =
+          !name.isEmpty()
+              && !p.isAbsolute()
+              && p.getRoot() == null
+              && !name.contains("\\")
+              && p.normalize().equals(p)
+              && !p.startsWith("..");
+    } catch (java.nio.file.InvalidPathException e) {
+      inside = false;
+    }
+    if (!inside) {
+      throw new ResultFolderException(
+          file
+              + ": files["
+              + index
+              + "] is '"
+              + name
+              + "', expected a name inside the folder; this folder is not written (remove the"
+              + " entry, or give another --out)");
+    }
+    return name;
   }
 
   private static String text(JsonNode root, String key, Path file) {

@@ -126,6 +126,24 @@ class ResultFolderTest {
   }
 
   @Test
+  void aManifestNamingFilesOutsideTheFolderIsRefusedAndNothingIsDeleted() throws IOException {
+    Path c = sheetCase("a.json", 1e-10);
+    Path out = dir.resolve("out");
+    RunPipeline.run(c, out, RunProgress.SILENT);
+    Path victim = Files.writeString(dir.resolve("keep-me.txt"), "a user's file");
+    RunManifest m = RunManifest.readFrom(out).orElseThrow();
+    for (String bad : List.of(victim.toAbsolutePath().toString(), "../keep-me.txt")) {
+      m.withFiles(List.of(bad)).writeTo(out);
+      ResultFolderException e =
+          assertThrows(
+              ResultFolderException.class, () -> RunPipeline.run(c, out, RunProgress.SILENT));
+      assertTrue(e.getMessage().contains("expected a name inside the folder"), e.getMessage());
+      assertTrue(e.getMessage().contains(bad), e.getMessage());
+      assertTrue(Files.exists(victim), bad);
+    }
+  }
+
+  @Test
   void aRerunDropsTheEarlierRunsFilesItDidNotReplace() throws IOException {
     Path c = sheetCase("a.json", 1e-10);
     Path out = dir.resolve("out");
