@@ -23,7 +23,7 @@ public final class CaseChecks {
    *     outside the mesh's bounding box)
    * @throws CaseInputException listing every mismatch: a material for a volume group the mesh
    *     lacks, a volume group with no material, a face entry for a face group the mesh lacks (with
-   *     the closest name), a concentration condition on an interface group
+   *     the closest name), a concentration condition or a sealed entry on an interface group
    */
   public static List<String> againstMesh(CaseSpec spec, TetMesh mesh) {
     Objects.requireNonNull(spec, "spec");
@@ -119,6 +119,20 @@ public final class CaseChecks {
             "found a concentration condition on interface group '"
                 + e.getKey()
                 + "', expected concentration only on exterior face groups");
+      }
+      // the parts share the interface's nodes, so nothing could seal it: the entry would be
+      // ignored while the user believes in a barrier
+      if (group.kind() == FaceGroupKind.INTERFACE && e.getValue().kind() == FaceKind.SEALED) {
+        String kindPath = CasePaths.child(path, "kind");
+        SourcePlace at = spec.placeOf(kindPath);
+        problems.add(
+            at.line(),
+            at.column(),
+            kindPath,
+            "found 'sealed' on interface group '"
+                + e.getKey()
+                + "', expected an interface to stay continuous (its parts share nodes); remove"
+                + " the entry, or mesh the parts apart for a barrier");
       }
     }
   }

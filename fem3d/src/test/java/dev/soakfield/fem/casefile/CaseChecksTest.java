@@ -73,6 +73,38 @@ class CaseChecksTest {
   }
 
   @Test
+  void sealedOnAnInterfaceIsRefusedRatherThanIgnored() throws IOException {
+    TetMesh plate =
+        StructuredMesher.layers(
+            0.01,
+            0.01,
+            1,
+            1,
+            List.of(
+                new StructuredMesher.Layer("lower", 0.001, 1),
+                new StructuredMesher.Layer("upper", 0.001, 1)),
+            1);
+    Path file =
+        write(
+            """
+            { "mesh": "plate.msh",
+              "materials": { "lower": { "diffusivity": 1e-12 },
+                             "upper": { "diffusivity": 1e-12 } },
+              "faces": { "zmax": { "kind": "concentration", "value": 1 },
+                         "lower-upper": { "kind": "sealed" } },
+              "time": { "end": 10 } }
+            """);
+    CaseSpec spec = CaseReader.read(file);
+    Problem p =
+        assertThrows(CaseInputException.class, () -> CaseChecks.againstMesh(spec, plate))
+            .problems()
+            .get(0);
+    assertEquals("faces.lower-upper.kind", p.path());
+    assertEquals(5, p.line());
+    assertTrue(p.message().startsWith("found 'sealed' on interface group 'lower-upper'"));
+  }
+
+  @Test
   void concentrationOnAnInterfaceIsAnError() throws IOException {
     TetMesh plate =
         StructuredMesher.layers(
@@ -108,7 +140,9 @@ class CaseChecksTest {
     Path fixed =
         write(
             Files.readString(file)
-                .replace("\"kind\": \"concentration\", \"value\": 1", "\"kind\": \"sealed\""));
+                .replaceAll(
+                    "\"lower-upper\": \\{\\s*\"kind\": \"concentration\", \"value\": 1 \\},\\s*",
+                    ""));
     List<String> warnings = CaseChecks.againstMesh(CaseReader.read(fixed), plate);
     assertTrue(warnings.contains("face group 'zmin' has no entry in faces: sealed by default"));
     assertTrue(
