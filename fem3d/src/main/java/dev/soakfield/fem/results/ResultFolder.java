@@ -77,20 +77,25 @@ public final class ResultFolder {
   }
 
   /**
-   * Reopens the folder of an interrupted run of the same case to go on from its checkpoint: the
-   * staged files stay, the manifest says running again.
+   * True when {@code target} holds an interrupted run of this case with a checkpoint to go on from;
+   * false when there is nothing to go on from yet (no run there, or one that stopped before its
+   * first checkpoint), so the run starts from the beginning.
    *
-   * @throws ResultFolderException when the folder holds no interrupted run of this case (no
-   *     manifest, another case or mesh, a finished or failed run, or no checkpoint yet)
+   * @throws ResultFolderException when the folder holds another case's run or a finished or failed
+   *     one, which a resume must not overwrite
    */
-  public static ResultFolder reopen(Path target, RunManifest starting, String checkpointName) {
+  public static boolean canResume(Path target, RunManifest starting, String checkpointName) {
     Path abs = target.toAbsolutePath().normalize();
-    RunManifest earlier =
-        RunManifest.readFrom(abs)
-            .orElseThrow(
-                () ->
-                    new ResultFolderException(
-                        abs + ": found no run to resume (no " + RunManifest.FILE + ")"));
+    Optional<RunManifest> earlier = RunManifest.readFrom(abs);
+    if (earlier.isEmpty()) {
+      return false;
+    }
+    checkSameInterruptedRun(abs, earlier.get(), starting);
+    return Files.isDirectory(abs.resolve(STAGING))
+        && Files.isRegularFile(abs.resolve(checkpointName));
+  }
+
+  private static void checkSameInterruptedRun(Path abs, RunManifest earlier, RunManifest starting) {
     if (!earlier.caseSha256().equals(starting.caseSha256())
         || !earlier.meshSha256().equals(starting.meshSha256())) {
       throw new ResultFolderException(
@@ -108,6 +113,24 @@ public final class ResultFolder {
               + earlier.status().word()
               + ", expected an interrupted one; nothing to resume, run again without --resume");
     }
+  }
+
+  /**
+   * Reopens the folder of an interrupted run of the same case to go on from its checkpoint: the
+   * staged files stay, the manifest says running again.
+   *
+   * @throws ResultFolderException when the folder holds no interrupted run of this case (no
+   *     manifest, another case or mesh, a finished or failed run, or no checkpoint yet)
+   */
+  public static ResultFolder reopen(Path target, RunManifest starting, String checkpointName) {
+    Path abs = target.toAbsolutePath().normalize();
+    RunManifest earlier =
+        RunManifest.readFrom(abs)
+            .orElseThrow(
+                () ->
+                    new ResultFolderException(
+                        abs + ": found no run to resume (no " + RunManifest.FILE + ")"));
+    checkSameInterruptedRun(abs, earlier, starting);
     if (!Files.isDirectory(abs.resolve(STAGING))
         || !Files.isRegularFile(abs.resolve(checkpointName))) {
       throw new ResultFolderException(

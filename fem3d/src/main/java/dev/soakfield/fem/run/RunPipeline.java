@@ -133,13 +133,22 @@ public final class RunPipeline {
     TimeSettings settings = settings(spec);
 
     RunManifest starting = RunManifest.starting(caseFile, spec.mesh(), options.toolVersion());
+    boolean resume =
+        options.resume() && ResultFolder.canResume(outDir, starting, Checkpointer.NAME);
+    if (options.resume() && !resume) {
+      warnings.add(
+          "--resume: "
+              + outDir
+              + " holds no checkpoint yet (no run there, or one that stopped before its first"
+              + " checkpoint); the run started from the beginning");
+    }
     ResultFolder folder =
-        options.resume()
+        resume
             ? ResultFolder.reopen(outDir, starting, Checkpointer.NAME)
             : ResultFolder.open(outDir, starting, options.force());
     Path checkpoint = folder.target().resolve(Checkpointer.NAME);
     String fingerprint = starting.caseSha256() + "/" + starting.meshSha256();
-    StateBundle resumeFrom = options.resume() ? readCheckpoint(checkpoint, fingerprint) : null;
+    StateBundle resumeFrom = resume ? readCheckpoint(checkpoint, fingerprint) : null;
     RunLog log;
     try {
       log = new RunLog(folder.work().resolve(RunLog.FILE));

@@ -144,6 +144,29 @@ class ResultFolderTest {
   }
 
   @Test
+  void resumeWithNoCheckpointYetRunsFromTheStartAndSaysSo() throws IOException {
+    Path c = sheetCase("a.json", 1e-10);
+    Path plain = dir.resolve("plain");
+    RunPipeline.run(c, plain, RunProgress.SILENT);
+    Path out = dir.resolve("never-run");
+    RunSummary s =
+        RunPipeline.run(c, out, RunProgress.SILENT, RunOptions.defaults().withResume(true));
+    assertTrue(
+        s.warnings().stream().anyMatch(w -> w.contains("the run started from the beginning")),
+        s.warnings().toString());
+    assertEquals(
+        Files.readString(plain.resolve("series.csv")), Files.readString(out.resolve("series.csv")));
+    // a finished run is never resumed over: that refusal stays
+    ResultFolderException e =
+        assertThrows(
+            ResultFolderException.class,
+            () ->
+                RunPipeline.run(
+                    c, out, RunProgress.SILENT, RunOptions.defaults().withResume(true)));
+    assertTrue(e.getMessage().contains("expected an interrupted one"), e.getMessage());
+  }
+
+  @Test
   void aRerunDropsTheEarlierRunsFilesItDidNotReplace() throws IOException {
     Path c = sheetCase("a.json", 1e-10);
     Path out = dir.resolve("out");
