@@ -8,6 +8,12 @@ import java.util.Set;
 
 /** Reads {@code time}: end, output times, scheme, capacity and step control. */
 final class TimeBinder {
+  /**
+   * The most fixed steps a case may ask for: 10⁷ steps write a series of about a gigabyte and
+   * mostly mean a unit slip (a step in s meant in h), not a wish.
+   */
+  static final long MAX_FIXED_STEPS = 10_000_000;
+
   private static final Set<String> KEYS =
       Set.of(
           "end",
@@ -78,6 +84,24 @@ final class TimeBinder {
         CaseFields.optional(obj, "stop")
             .map(n -> stop(n, CasePaths.child(path, "stop")).map(Optional::of))
             .orElse(Optional.of(Optional.empty()));
+    if (end.isPresent()
+        && steps.isPresent()
+        && steps.get() instanceof StepControl.Fixed fixed
+        && !(end.getAsDouble() / fixed.step() <= MAX_FIXED_STEPS)) {
+      fields
+          .problems()
+          .found(
+              obj.members().get("step").value(),
+              CasePaths.child(path, "step"),
+              "a step giving at most "
+                  + MAX_FIXED_STEPS
+                  + " steps up to the end ("
+                  + CaseFields.plain(end.getAsDouble())
+                  + " s needs "
+                  + String.format(java.util.Locale.ROOT, "%.3g", end.getAsDouble() / fixed.step())
+                  + "); take a longer step or adaptive steps");
+      steps = Optional.empty();
+    }
     if (stop.isEmpty()
         || end.isEmpty()
         || outputs.isEmpty()
