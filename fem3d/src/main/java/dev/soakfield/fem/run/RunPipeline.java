@@ -91,6 +91,20 @@ public final class RunPipeline {
     return new Prepared(spec, mesh, warnings);
   }
 
+  /**
+   * Binds everything a run binds before it solves — the materials' source laws and their
+   * parameters, the restart folder of {@code initial.from} — so that a case that passes {@code
+   * check} cannot fail {@code run} on input; returns the warnings binding adds.
+   *
+   * @throws dev.soakfield.fem.casefile.CaseInputException for an unknown law, a parameter that does
+   *     not fit, or a restart folder without a usable final state (at their place in the case)
+   */
+  public static List<String> bindAll(Prepared prepared, LawResolver laws) {
+    List<String> warnings = new ArrayList<>();
+    ModelBuilder.build(prepared.spec(), prepared.mesh(), warnings, laws);
+    return warnings;
+  }
+
   /** Runs the case and writes its results into {@code outDir}, with default options. */
   public static RunSummary run(Path caseFile, Path outDir, RunProgress progress)
       throws IOException {

@@ -52,11 +52,12 @@ public final class CaseOverview {
       sb.append(
           String.format(
               Locale.ROOT,
-              "  %-16s D = %s, S = %s, source %s%n",
+              "  %-16s D = %s, S = %s, source %s%s%n",
               m.volumeGroup(),
               diffusivity(m.diffusivity()),
               num(m.solubility()),
-              source(m.source())));
+              source(m.source()),
+              sourceLaws(m.laws())));
     }
     sb.append("face groups:\n");
     List<String> unassigned = new ArrayList<>();
@@ -189,6 +190,26 @@ public final class CaseOverview {
       return "first-order " + num(r.rate()) + " 1/s";
     }
     return s.kind();
+  }
+
+  /** The source laws as bound: id and the parameters the case gives. */
+  private static String sourceLaws(List<SourceSpec.LawSource> laws) {
+    if (laws.isEmpty()) {
+      return "";
+    }
+    List<String> named = new ArrayList<>();
+    for (SourceSpec.LawSource l : laws) {
+      List<String> given = new ArrayList<>();
+      l.parameters()
+          .forEach(
+              (k, v) -> {
+                if (!k.equals("law")) {
+                  given.add(k + " = " + v);
+                }
+              });
+      named.add(l.id() + (given.isEmpty() ? "" : " (" + String.join(", ", given) + ")"));
+    }
+    return "; source laws " + String.join(" + ", named);
   }
 
   private static String num(double v) {

@@ -70,4 +70,49 @@ class CheckCommandTest {
     CliRun r = CliRun.of("check", c.toString());
     assertEquals(0, r.exitCode(), r.err());
   }
+
+  /** A sealed cube of the mesh command's making, with {@code source} and {@code initial}. */
+  private Path cube(String source, String initial) throws Exception {
+    CliRun m =
+        CliRun.of(
+            "mesh",
+            "box",
+            "--size",
+            "1e-3,1e-3,1e-3",
+            "--cells",
+            "2,2,2",
+            "--out",
+            dir.resolve("cube.msh").toString());
+    assertEquals(ExitCodes.OK, m.exitCode(), m.err());
+    return Files.writeString(
+        dir.resolve("cube.json"),
+        """
+        { "mesh": "cube.msh",
+          "materials": { "body": { "diffusivity": 1e-9, "solubility": 1.0,
+                                   "source": %s } },
+          "initial": %s,
+          "time": { "end": 1000, "step": 5 } }
+        """
+            .formatted(source, initial));
+  }
+
+  @Test
+  void checkBindsSourceLawsAndRestartFoldersAsRunDoes() throws Exception {
+    Path good = cube("{ \"law\": \"consumption\", \"rate-constant\": 1e-4 }", "1.0");
+    CliRun ok = CliRun.of("check", good.toString());
+    assertEquals(ExitCodes.OK, ok.exitCode(), ok.err());
+    assertTrue(ok.out().contains("source laws consumption (rate-constant = 1.0E-4)"), ok.out());
+
+    Path typo = cube("{ \"law\": \"consumption\", \"rate-constnt\": 1e-4 }", "1.0");
+    CliRun t = CliRun.of("check", typo.toString());
+    assertEquals(ExitCodes.BAD_INPUT, t.exitCode(), t.out());
+    assertTrue(t.err().contains("rate-constnt"), t.err());
+    assertTrue(t.err().contains("line 3"), t.err());
+    assertFalse(t.err().contains("Exception"), t.err());
+
+    Path restart = cube("{ \"kind\": \"none\" }", "{ \"from\": \"no-such-run\" }");
+    CliRun r = CliRun.of("check", restart.toString());
+    assertEquals(ExitCodes.BAD_INPUT, r.exitCode(), r.out());
+    assertTrue(r.err().contains("initial.from"), r.err());
+  }
 }
