@@ -1,7 +1,6 @@
 package dev.soakfield.cli;
 
 import dev.soakfield.app.CaseOverview;
-import dev.soakfield.fem.laws.PluginFolders;
 import dev.soakfield.fem.laws.SourceLawCatalog;
 import dev.soakfield.fem.run.RunPipeline;
 import java.io.PrintWriter;
@@ -10,8 +9,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
@@ -35,20 +34,14 @@ final class CheckCommand implements Callable<Integer> {
   @Parameters(index = "0", paramLabel = "CASE.json", description = "The case file.")
   Path caseFile;
 
-  @Option(
-      names = "--plugins",
-      paramLabel = "DIR",
-      description =
-          "A folder of source-law plugin jars, searched after ~/.soakfield/plugins; repeatable"
-              + " (as for run).")
-  List<Path> plugins = new ArrayList<>();
+  @Mixin PluginFolderOption pluginFolders;
 
   @Override
   public Integer call() {
     RunPipeline.Prepared read = RunPipeline.prepare(caseFile);
     // bind what run binds (source laws, initial.from), so a case check passes cannot fail run
     List<String> warnings = new ArrayList<>(read.warnings());
-    SourceLawCatalog laws = SourceLawCatalog.load(PluginFolders.withDefault(plugins));
+    SourceLawCatalog laws = pluginFolders.catalog();
     warnings.addAll(RunPipeline.bindAll(read, laws.resolver()));
     RunPipeline.Prepared p = new RunPipeline.Prepared(read.spec(), read.mesh(), warnings);
     PrintWriter out = spec.commandLine().getOut();

@@ -1,17 +1,15 @@
 package dev.soakfield.cli;
 
 import dev.soakfield.app.CaseRun;
-import dev.soakfield.fem.laws.PluginFolders;
 import dev.soakfield.fem.laws.SourceLawCatalog;
 import dev.soakfield.fem.run.RunOptions;
 import dev.soakfield.fem.run.RunSummary;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -47,13 +45,7 @@ final class RunCommand implements Callable<Integer> {
   @Option(names = "--quiet", description = "Print nothing but errors.")
   boolean quiet;
 
-  @Option(
-      names = "--plugins",
-      paramLabel = "DIR",
-      description =
-          "A folder of source-law plugin jars, searched after ~/.soakfield/plugins; repeatable."
-              + " Plugins are code with full trust.")
-  List<Path> plugins = new ArrayList<>();
+  @Mixin PluginFolderOption pluginFolders;
 
   /** The laws this run may use; loaded before the run so that a broken plugin stops it early. */
   SourceLawCatalog laws;
@@ -100,7 +92,7 @@ final class RunCommand implements Callable<Integer> {
           "--checkpoint-every: found " + checkpointEvery + ", expected 0 or more");
     }
     PrintWriter err = spec.commandLine().getErr();
-    laws = SourceLawCatalog.load(PluginFolders.withDefault(plugins));
+    laws = pluginFolders.catalog();
     ProgressLine progress = new ProgressLine(err, quiet);
     RunOptions options =
         RunOptions.defaults()

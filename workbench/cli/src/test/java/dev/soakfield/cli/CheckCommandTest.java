@@ -71,29 +71,8 @@ class CheckCommandTest {
     assertEquals(0, r.exitCode(), r.err());
   }
 
-  /** A sealed cube of the mesh command's making, with {@code source} and {@code initial}. */
   private Path cube(String source, String initial) throws Exception {
-    CliRun m =
-        CliRun.of(
-            "mesh",
-            "box",
-            "--size",
-            "1e-3,1e-3,1e-3",
-            "--cells",
-            "2,2,2",
-            "--out",
-            dir.resolve("cube.msh").toString());
-    assertEquals(ExitCodes.OK, m.exitCode(), m.err());
-    return Files.writeString(
-        dir.resolve("cube.json"),
-        """
-        { "mesh": "cube.msh",
-          "materials": { "body": { "diffusivity": 1e-9, "solubility": 1.0,
-                                   "source": %s } },
-          "initial": %s,
-          "time": { "end": 1000, "step": 5 } }
-        """
-            .formatted(source, initial));
+    return Samples.sealedCube(dir, source, initial);
   }
 
   @Test

@@ -127,28 +127,7 @@ class ExamplePluginTest {
   }
 
   private Path sealedCube(String source) throws Exception {
-    Path mesh = dir.resolve("cube.msh");
-    CliRun m =
-        CliRun.of(
-            "mesh",
-            "box",
-            "--size",
-            "1e-3,1e-3,1e-3",
-            "--cells",
-            "2,2,2",
-            "--out",
-            mesh.toString());
-    assertEquals(ExitCodes.OK, m.exitCode(), m.err());
-    return Files.writeString(
-        dir.resolve("case.json"),
-        """
-        { "mesh": "cube.msh",
-          "materials": { "body": { "diffusivity": 1e-9, "solubility": 1.0,
-                                   "source": %s } },
-          "initial": 2.0,
-          "time": { "end": 1000, "step": 5 } }
-        """
-            .formatted(source));
+    return Samples.sealedCube(dir, source, "2.0");
   }
 
   @Test

@@ -6,7 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 
-/** Copies the bundled sample case and mesh into a test folder. */
+/** Test cases: the bundled sample copied into a test folder, and a small sealed cube. */
 final class Samples {
   static final String CASE = "sensor-pod.case.json";
   static final String MESH = "sensor-pod.msh";
@@ -24,5 +24,36 @@ final class Samples {
       }
     }
     return dir.resolve(CASE);
+  }
+
+  /**
+   * A sealed 1 mm cube (the mesh command's 2×2×2 box) of one material, D = 1e-9 m²/s, S = 1, with
+   * {@code source} as its source object and {@code initial} as the initial value, run for 1000 s in
+   * 5 s steps; the case file in {@code dir}.
+   */
+  static Path sealedCube(Path dir, String source, String initial) throws IOException {
+    CliRun m =
+        CliRun.of(
+            "mesh",
+            "box",
+            "--size",
+            "1e-3,1e-3,1e-3",
+            "--cells",
+            "2,2,2",
+            "--out",
+            dir.resolve("cube.msh").toString());
+    if (m.exitCode() != ExitCodes.OK) {
+      throw new IllegalStateException("mesh box failed: " + m.err());
+    }
+    return Files.writeString(
+        dir.resolve("case.json"),
+        """
+        { "mesh": "cube.msh",
+          "materials": { "body": { "diffusivity": 1e-9, "solubility": 1.0,
+                                   "source": %s } },
+          "initial": %s,
+          "time": { "end": 1000, "step": 5 } }
+        """
+            .formatted(source, initial));
   }
 }
