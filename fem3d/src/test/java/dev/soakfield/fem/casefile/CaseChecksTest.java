@@ -19,6 +19,18 @@ class CaseChecksTest {
   // layers adds one volume group per layer and the interface group "lower-upper".
   private static final TetMesh BOX = StructuredMesher.box(0.01, 0.01, 0.002, 2, 2, 1, 1);
 
+  // two 1 mm layers with the interface group "lower-upper" between them
+  private static final TetMesh PLATE =
+      StructuredMesher.layers(
+          0.01,
+          0.01,
+          1,
+          1,
+          List.of(
+              new StructuredMesher.Layer("lower", 0.001, 1),
+              new StructuredMesher.Layer("upper", 0.001, 1)),
+          1);
+
   @TempDir Path dir;
 
   @Test
@@ -74,16 +86,6 @@ class CaseChecksTest {
 
   @Test
   void sealedOnAnInterfaceIsRefusedRatherThanIgnored() throws IOException {
-    TetMesh plate =
-        StructuredMesher.layers(
-            0.01,
-            0.01,
-            1,
-            1,
-            List.of(
-                new StructuredMesher.Layer("lower", 0.001, 1),
-                new StructuredMesher.Layer("upper", 0.001, 1)),
-            1);
     Path file =
         write(
             """
@@ -96,7 +98,7 @@ class CaseChecksTest {
             """);
     CaseSpec spec = CaseReader.read(file);
     Problem p =
-        assertThrows(CaseInputException.class, () -> CaseChecks.againstMesh(spec, plate))
+        assertThrows(CaseInputException.class, () -> CaseChecks.againstMesh(spec, PLATE))
             .problems()
             .get(0);
     assertEquals("faces.lower-upper.kind", p.path());
@@ -106,16 +108,6 @@ class CaseChecksTest {
 
   @Test
   void concentrationOnAnInterfaceIsAnError() throws IOException {
-    TetMesh plate =
-        StructuredMesher.layers(
-            0.01,
-            0.01,
-            1,
-            1,
-            List.of(
-                new StructuredMesher.Layer("lower", 0.001, 1),
-                new StructuredMesher.Layer("upper", 0.001, 1)),
-            1);
     Path file =
         write(
             """
@@ -130,7 +122,7 @@ class CaseChecksTest {
             """);
     CaseSpec spec = CaseReader.read(file);
     Problem p =
-        assertThrows(CaseInputException.class, () -> CaseChecks.againstMesh(spec, plate))
+        assertThrows(CaseInputException.class, () -> CaseChecks.againstMesh(spec, PLATE))
             .problems()
             .get(0);
     assertEquals("faces.lower-upper.kind", p.path());
@@ -143,7 +135,7 @@ class CaseChecksTest {
                 .replaceAll(
                     "\"lower-upper\": \\{\\s*\"kind\": \"concentration\", \"value\": 1 \\},\\s*",
                     ""));
-    List<String> warnings = CaseChecks.againstMesh(CaseReader.read(fixed), plate);
+    List<String> warnings = CaseChecks.againstMesh(CaseReader.read(fixed), PLATE);
     assertTrue(warnings.contains("face group 'zmin' has no entry in faces: sealed by default"));
     assertTrue(
         warnings.stream()
