@@ -25,4 +25,17 @@ public final class CaseReader {
     CaseNode root = CaseTreeReader.read(caseFile, source);
     return CaseBinder.bind(root, caseFile, source);
   }
+
+  /**
+   * Reads case text held in memory as if it were the file {@code caseFile} (whose folder resolves
+   * the mesh path), with the same checks and messages as {@link #read}.
+   *
+   * @param sourceName the name problems are reported under
+   * @throws CaseInputException when the text is malformed or holds a wrong value
+   */
+  public static CaseSpec readText(String text, Path caseFile, String sourceName) {
+    Objects.requireNonNull(text, "text");
+    Objects.requireNonNull(caseFile, "caseFile");
+    return CaseBinder.bind(CaseTreeReader.readText(text, sourceName), caseFile, sourceName);
+  }
 }

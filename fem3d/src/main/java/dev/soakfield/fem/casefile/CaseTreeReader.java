@@ -39,16 +39,31 @@ final class CaseTreeReader {
     try (InputStream in = Files.newInputStream(file);
         JsonParser parser = FACTORY.createParser(in)) {
       return readDocument(parser, source);
-    } catch (JsonProcessingException e) {
-      JsonLocation at = e.getLocation();
-      int line = at == null ? 0 : at.getLineNr();
-      int column = at == null ? 0 : at.getColumnNr();
-      throw single(source, line, column, "malformed JSON: " + withoutParserSource(e));
     } catch (NoSuchFileException e) {
       throw single(source, 0, 0, "found no such file, expected a readable case file");
     } catch (IOException e) {
-      throw single(source, 0, 0, "found an unreadable file (" + e.getMessage() + ")");
+      throw located(e, source);
     }
+  }
+
+  /** Reads case text held in memory (a case being edited), as {@link #read} reads a file. */
+  static CaseNode readText(String text, String source) {
+    try (JsonParser parser = FACTORY.createParser(text)) {
+      return readDocument(parser, source);
+    } catch (IOException e) {
+      throw located(e, source);
+    }
+  }
+
+  /** A parser failure at its line and column; any other read failure for the whole file. */
+  private static CaseInputException located(IOException failure, String source) {
+    if (failure instanceof JsonProcessingException e) {
+      JsonLocation at = e.getLocation();
+      int line = at == null ? 0 : at.getLineNr();
+      int column = at == null ? 0 : at.getColumnNr();
+      return single(source, line, column, "malformed JSON: " + withoutParserSource(e));
+    }
+    return single(source, 0, 0, "found an unreadable file (" + failure.getMessage() + ")");
   }
 
   private static CaseNode readDocument(JsonParser parser, String source) throws IOException {

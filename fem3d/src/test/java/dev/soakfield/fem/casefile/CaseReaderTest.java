@@ -173,6 +173,27 @@ class CaseReaderTest {
   }
 
   @Test
+  void textInMemoryReadsAsTheFileWouldAndNamesItsPlaces() throws IOException {
+    Path file = CaseFiles.resource("example.json");
+    String text = Files.readString(file);
+    CaseSpec fromFile = CaseReader.read(file);
+    CaseSpec fromText = CaseReader.readText(text, file, "edited case");
+    assertEquals(fromFile.mesh(), fromText.mesh());
+    assertEquals(fromFile.materials(), fromText.materials());
+    assertEquals(fromFile.faces(), fromText.faces());
+    assertEquals(fromFile.time(), fromText.time());
+    assertEquals(fromFile.places(), fromText.places());
+    CaseInputException e =
+        assertThrows(
+            CaseInputException.class,
+            () ->
+                CaseReader.readText(
+                    Files.readString(CaseFiles.resource("malformed.json")), file, "edited case"));
+    assertEquals(3, single(e).line());
+    assertTrue(e.getMessage().startsWith("edited case, line 3, column 3, malformed JSON"));
+  }
+
+  @Test
   void wrongTypesAndMissingKeysNameTheirPath() throws IOException {
     Path file =
         write(
