@@ -36,6 +36,7 @@ final class ProgressRelay implements StepListener {
     steps++;
     iterations += outcome.iterations();
     solveSeconds += outcome.solveSeconds();
+    progress.linearIterations(iterations);
     progress.step(t, end, steps, rejected);
     log.progress(t, end, steps, rejected);
     if (output) {
