@@ -55,6 +55,15 @@ public final class OrbitCamera {
   private int width = 800;
   private int height = 600;
 
+  /** Takes another camera's view (target, angles, zoom), keeping this one's picture size. */
+  public void copyFrom(OrbitCamera o) {
+    target.set(o.target);
+    yawDeg = o.yawDeg;
+    pitchDeg = o.pitchDeg;
+    halfHeight = o.halfHeight;
+    radius = o.radius;
+  }
+
   /** Sets the picture size in pixels. */
   public void viewport(int w, int h) {
     if (w <= 0 || h <= 0) {

@@ -93,7 +93,9 @@ public final class Scene {
             + "|"
             + settings.high()
             + "|"
-            + values.isPresent();
+            + values.isPresent()
+            + "|"
+            + java.util.Arrays.hashCode(settings.groupColours());
     if (!fk.equals(fieldKey)) {
       colourSurface(values);
       fieldKey = fk;
@@ -165,8 +167,10 @@ public final class Scene {
         }
       }
     } else {
+      int[] own = settings.groupColours();
       for (int t = 0; t < tris; t++) {
-        int rgb = FaceGroupPalette.colourOf(surface.faceGroup(t));
+        int g = surface.faceGroup(t);
+        int rgb = g >= 0 && g < own.length ? own[g] : FaceGroupPalette.colourOf(g);
         for (int k = 0; k < 3; k++) {
           ramp[3 * t + k] = -1f;
           setColour(colours, 3 * t + k, rgb);

@@ -67,6 +67,7 @@ public final class ViewSettings {
   private final List<Double> isoLevels = new ArrayList<>();
   private float isoOpacity = 0.45f;
   private int generation;
+  private int[] groupColours = new int[0];
 
   /** Counts changes, so the scene knows when to rebuild. */
   public int generation() {
@@ -75,6 +76,21 @@ public final class ViewSettings {
 
   private void changed() {
     generation++;
+  }
+
+  /**
+   * Colours (0xRRGGBB) by face group that replace the palette's while no field is shown (the set-up
+   * view colours groups by their kind); empty for the palette.
+   */
+  public int[] groupColours() {
+    return groupColours.clone();
+  }
+
+  public void groupColours(int[] colours) {
+    if (!java.util.Arrays.equals(colours, groupColours)) {
+      groupColours = colours.clone();
+      changed();
+    }
   }
 
   public Optional<FieldKind> field() {

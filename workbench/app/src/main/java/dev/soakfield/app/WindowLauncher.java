@@ -1,5 +1,6 @@
 package dev.soakfield.app;
 
+import dev.soakfield.app.setup.SetupSession;
 import java.util.Optional;
 
 /**
@@ -10,6 +11,6 @@ public interface WindowLauncher {
   /** Why no window can be shown here (no display, say), or empty when one can. */
   Optional<String> whyNoWindow();
 
-  /** Opens the window on {@code study} (a file dialog asks when empty) and returns when closed. */
-  void open(Optional<Study> study);
+  /** Opens the window on {@code session} and returns when it is closed. */
+  void open(SetupSession session);
 }

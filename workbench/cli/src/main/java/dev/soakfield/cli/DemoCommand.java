@@ -5,11 +5,8 @@ import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunSummary;
 import dev.soakfield.report.ReportWriter;
 import java.io.IOException;
-import java.io.InputStream;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -25,12 +22,6 @@ import picocli.CommandLine.Spec;
       "Copies the case and mesh into OUT/case and writes the results into OUT/results."
     })
 final class DemoCommand implements Callable<Integer> {
-  static final String[] FILES = {
-    "sensor-pod.msh",
-    "sensor-pod.case.json",
-    "sensor-pod-humid.case.json",
-    "sensor-pod-bake.case.json"
-  };
 
   @Spec CommandSpec spec;
 
@@ -43,21 +34,12 @@ final class DemoCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws IOException {
-    Path caseDir = out.resolve("case");
-    Files.createDirectories(caseDir);
-    for (String name : FILES) {
-      try (InputStream in = DemoCommand.class.getResourceAsStream("/samples/" + name)) {
-        if (in == null) {
-          throw new IllegalStateException("the demo file " + name + " is missing from the jar");
-        }
-        Files.copy(in, caseDir.resolve(name), StandardCopyOption.REPLACE_EXISTING);
-      }
-    }
+    Path demoCase = DemoFiles.copyInto(out.resolve("case"), false);
     PrintWriter o = spec.commandLine().getOut();
-    o.println("demo case: " + caseDir.resolve(FILES[1]));
+    o.println("demo case: " + demoCase);
     o.flush();
     ProgressLine progress = new ProgressLine(spec.commandLine().getErr(), false);
-    RunSummary s = RunPipeline.run(caseDir.resolve(FILES[1]), out.resolve("results"), progress);
+    RunSummary s = RunPipeline.run(demoCase, out.resolve("results"), progress);
     progress.done();
     ReportWriter.write(s.outputFolder());
     RunCommand.report(o, s);

@@ -1,24 +1,28 @@
 package dev.soakfield.cli;
 
 import dev.soakfield.app.GraphicsServices;
-import dev.soakfield.app.Study;
 import dev.soakfield.app.WindowLauncher;
+import dev.soakfield.app.setup.SetupSession;
+import java.io.IOException;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-/** {@code soakfield gui}: the 3D workbench window. */
+/** {@code soakfield gui}: the workbench window, where a case is set up, run and looked at. */
 @Command(
     name = "gui",
     mixinStandardHelpOptions = true,
     description = {
-      "Opens the workbench window on a mesh (.msh), a case (.json) or a result folder: the part"
-          + " shaded by face group or by a field, section, isosurfaces, time slider, probes and"
-          + " the uptake plot."
+      "Opens the workbench window on a mesh (.msh: a new case beside it), a case (.json) or a"
+          + " result folder: pick face groups into kinds, give parts materials, edit the"
+          + " exposure and times, run, and look at the results (section, isosurfaces, time"
+          + " slider, probes, uptake plot).",
+      "Without PATH it opens a copy of the bundled demo case in ~/soakfield/demo."
     })
 final class GuiCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
@@ -27,11 +31,26 @@ final class GuiCommand implements Callable<Integer> {
       index = "0",
       arity = "0..1",
       paramLabel = "MESH.msh|CASE.json|RESULTS_DIR",
-      description = "What to open (a file dialog asks when left out).")
+      description = "What to open (default: a copy of the demo case under your home folder).")
   Path input;
 
+  @Mixin PluginFolderOption pluginFolders;
+
   @Override
-  public Integer call() {
+  public Integer call() throws IOException {
+    WindowLauncher window = launcher();
+    Path what = input;
+    if (what == null) {
+      what = DemoFiles.copyInto(DemoFiles.windowCopy(), true);
+      spec.commandLine().getOut().println("opening the demo case " + what);
+      spec.commandLine().getOut().flush();
+    }
+    window.open(SetupSession.open(what, pluginFolders.catalog()));
+    return ExitCodes.OK;
+  }
+
+  /** The window service, or a user-facing error saying why there is no window here. */
+  static WindowLauncher launcher() {
     WindowLauncher window =
         GraphicsServices.window()
             .orElseThrow(() -> new UserInputException("gui: " + GraphicsServices.NO_WINDOW));
@@ -44,8 +63,6 @@ final class GuiCommand implements Callable<Integer> {
               + " --field c --out PIC.png' (see 'soakfield render --help'), or run under a virtual"
               + " display: xvfb-run -a soakfield gui ...");
     }
-    Optional<Study> study = input == null ? Optional.empty() : Optional.of(Study.open(input));
-    window.open(study);
-    return ExitCodes.OK;
+    return window;
   }
 }

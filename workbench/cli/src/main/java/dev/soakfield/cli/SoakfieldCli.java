@@ -29,8 +29,17 @@ import picocli.CommandLine.Command;
 public final class SoakfieldCli implements Runnable {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
+  /** With no command: the workbench on the demo case where a window can open, else the usage. */
   @Override
   public void run() {
+    boolean window =
+        dev.soakfield.app.GraphicsServices.window()
+            .map(w -> w.whyNoWindow().isEmpty())
+            .orElse(false);
+    if (window) {
+      spec.commandLine().getSubcommands().get("gui").execute();
+      return;
+    }
     spec.commandLine().usage(spec.commandLine().getOut());
   }
 

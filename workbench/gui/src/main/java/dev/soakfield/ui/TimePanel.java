@@ -16,10 +16,12 @@ import org.lwjgl.system.MemoryStack;
 /** The "Time" strip below the view: the frame slider, play/pause and its speed, the time shown. */
 final class TimePanel {
   private final NkContext ctx;
+  private final Widgets widgets;
   private final WorkbenchModel model;
 
-  TimePanel(NkContext ctx, WorkbenchModel model) {
-    this.ctx = ctx;
+  TimePanel(Widgets widgets, WorkbenchModel model) {
+    this.ctx = widgets.ctx();
+    this.widgets = widgets;
     this.model = model;
   }
 
@@ -27,7 +29,7 @@ final class TimePanel {
     Optional<StoredRun> r = model.study().results();
     if (r.isEmpty()) {
       nk_layout_row_dynamic(ctx, 20, 1);
-      nk_label(ctx, "no results: open a result folder to see fields over time", NK_TEXT_LEFT);
+      nk_label(ctx, "no results yet: run the case (Ctrl+R) to see fields over time", NK_TEXT_LEFT);
       return;
     }
     ViewSettings settings = model.settings();
@@ -35,6 +37,7 @@ final class TimePanel {
     int frames = r.get().frameCount();
     nk_layout_row_dynamic(ctx, 22, 1);
     var f = stack.ints(settings.frame());
+    widgets.place("time slider");
     nk_slider_int(ctx, 0, f, frames - 1, 1);
     if (f.get(0) != settings.frame()) {
       settings.frame(f.get(0));

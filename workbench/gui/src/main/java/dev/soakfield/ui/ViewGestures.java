@@ -26,8 +26,16 @@ import org.lwjgl.system.MemoryStack;
 final class ViewGestures {
   private static final int CLICK_SLOP = 3;
 
+  /** What a click on the view does in the current mode. */
+  interface ClickAction {
+    /** A click at view pixel (x, y); {@code adding} when Shift was held. */
+    void click(double x, double y, boolean adding);
+  }
+
   private final NkContext ctx;
   private final WorkbenchModel model;
+  private ClickAction onClick;
+  private boolean shift;
   private final ViewLayout layout;
   private double mouseX;
   private double mouseY;
@@ -41,6 +49,16 @@ final class ViewGestures {
     this.ctx = ctx;
     this.model = model;
     this.layout = layout;
+    this.onClick = (x, y, adding) -> model.probe().click(model.scene(), model.camera(), x, y);
+  }
+
+  void onClick(ClickAction action) {
+    onClick = action;
+  }
+
+  /** Whether Shift is held (told by the window with each button event). */
+  void shift(boolean held) {
+    shift = held;
   }
 
   /** Whether the view is being dragged now (the renderer then draws a lighter picture). */
@@ -93,7 +111,7 @@ final class ViewGestures {
       }
     } else if (dragButton == button) {
       if (!dragged && button == GLFW_MOUSE_BUTTON_LEFT) {
-        model.probe().click(model.scene(), model.camera(), x - ViewLayout.LEFT, y);
+        onClick.click(x - ViewLayout.LEFT, y, shift);
       }
       dragButton = -1;
     }

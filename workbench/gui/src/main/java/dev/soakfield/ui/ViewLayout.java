@@ -8,8 +8,8 @@ import dev.soakfield.render.GlSurface;
  */
 final class ViewLayout {
   static final int LEFT = 270;
-  static final int RIGHT = 330;
-  static final int BOTTOM = 92;
+  static final int RIGHT = 400;
+  static final int BOTTOM = 118;
 
   private int width = 1;
   private int height = 1;

@@ -1,7 +1,7 @@
 package dev.soakfield.ui;
 
-import dev.soakfield.app.Study;
 import dev.soakfield.app.WindowLauncher;
+import dev.soakfield.app.setup.SetupSession;
 import dev.soakfield.render.GlRuntime;
 import java.util.Optional;
 
@@ -13,7 +13,7 @@ public final class WorkbenchLauncher implements WindowLauncher {
   }
 
   @Override
-  public void open(Optional<Study> study) {
-    WorkbenchWindow.run(study);
+  public void open(SetupSession session) {
+    WorkbenchWindow.run(session);
   }
 }

@@ -51,6 +51,7 @@ public final class CaseDraft {
     ObjectNode time = tree.putObject("time");
     time.put("end", "24 h");
     time.put("tolerance", 1e-3);
+    time.put("capacity", "lumped"); // keeps values within their bounds from the first step
     String stem = stem(meshFile.getFileName().toString(), ".msh");
     Path caseFile = meshFile.toAbsolutePath().resolveSibling(stem + ".case.json");
     return new CaseDraft(caseFile, new State(tree, mesh, false), false);

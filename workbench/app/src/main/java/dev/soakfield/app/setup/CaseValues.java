@@ -7,7 +7,8 @@ import java.math.BigDecimal;
 /**
  * Values as typed into a field and as stored in the case: a plain number stays a JSON number as
  * typed, anything else (a value with a unit, "168 h", "85 degC", a word) a string the case reader
- * then checks; an arrow makes a ramp ({@code "85 degC -> 125 degC"} → a two-element array).
+ * then checks; an arrow makes a ramp ({@code "85 degC -> 125 degC"} → a two-element array) and
+ * commas a list ({@code "1 h, 6 h, 24 h"}, a point {@code "0.005, 0.005, 0.001"}).
  */
 public final class CaseValues {
   private static final JsonNodeFactory F = JsonNodeFactory.instance;
@@ -29,7 +30,25 @@ public final class CaseValues {
         return F.arrayNode().add(from).add(to);
       }
     }
+    if (t.indexOf(',') >= 0) {
+      var list = F.arrayNode();
+      for (String part : t.split(",", -1)) {
+        JsonNode n = node(part);
+        if (n != null) {
+          list.add(n);
+        }
+      }
+      return list;
+    }
     return number(t);
+  }
+
+  /** The text of a value that may be a ramp (two values, shown with an arrow). */
+  public static String rampText(JsonNode n) {
+    if (n != null && n.isArray() && n.size() == 2 && !n.get(0).isContainerNode()) {
+      return text(n.get(0)) + " " + ARROW + " " + text(n.get(1));
+    }
+    return text(n);
   }
 
   private static JsonNode number(String t) {
@@ -44,13 +63,17 @@ public final class CaseValues {
     }
   }
 
-  /** The text a field shows for a stored value. */
+  /** The text a field shows for a stored value: lists joined by commas. */
   public static String text(JsonNode n) {
     if (n == null || n.isMissingNode() || n.isNull()) {
       return "";
     }
-    if (n.isArray() && n.size() == 2 && !n.get(0).isContainerNode()) {
-      return text(n.get(0)) + " " + ARROW + " " + text(n.get(1));
+    if (n.isArray()) {
+      StringBuilder sb = new StringBuilder();
+      for (JsonNode item : n) {
+        sb.append(sb.length() > 0 ? ", " : "").append(text(item));
+      }
+      return sb.toString();
     }
     if (n.isBigDecimal()) {
       return n.decimalValue().toString();

@@ -1,0 +1,192 @@
+package dev.soakfield.ui;
+
+import static org.lwjgl.nuklear.Nuklear.*;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import dev.soakfield.app.setup.CaseDraft;
+import dev.soakfield.app.setup.CaseValues;
+import dev.soakfield.app.setup.DraftCheck;
+import dev.soakfield.app.setup.FaceEdits;
+import dev.soakfield.app.setup.FaceSelection;
+import dev.soakfield.app.setup.KindColours;
+import dev.soakfield.app.setup.SetupSession;
+import dev.soakfield.fem.physics.FaceKind;
+import dev.soakfield.mesh.FaceGroup;
+import dev.soakfield.mesh.FaceGroupKind;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.Supplier;
+
+/**
+ * The "Faces" tab: the face groups with their kinds (those with no entry stand out: sealed by
+ * default), a selection shared with the view, the kind buttons and the selection's values as a
+ * constant or a time table.
+ */
+final class FacesTab {
+  private final Widgets w;
+  private final Supplier<SetupSession> session;
+
+  FacesTab(Widgets w, Supplier<SetupSession> session) {
+    this.w = w;
+    this.session = session;
+  }
+
+  void draw() {
+    var ctx = w.ctx();
+    SetupSession s = session.get();
+    nk_layout_row_dynamic(ctx, 20, 1);
+    if (s.draft().isEmpty()) {
+      nk_label(ctx, "no case open: open a mesh or a case to set up its faces", NK_TEXT_LEFT);
+      return;
+    }
+    CaseDraft d = s.draft().get();
+    FaceEdits faces = new FaceEdits(d);
+    FaceSelection sel = s.selection();
+    List<FaceGroup> groups = d.mesh().faceGroups();
+    nk_label(ctx, "Face groups (click in the view; Shift+click adds)", NK_TEXT_LEFT);
+    int unset = 0;
+    for (FaceGroup g : groups) {
+      boolean iface = g.kind() == FaceGroupKind.INTERFACE;
+      String kind = faces.kindOf(g.name());
+      nk_layout_row_dynamic(ctx, 20, 2);
+      w.place("group " + g.name());
+      boolean on = nk_check_label(ctx, g.name(), sel.contains(g.name()));
+      if (on != sel.contains(g.name())) {
+        sel.set(g.name(), on);
+      }
+      if (!kind.isEmpty()) {
+        w.label(kind, KindColours.of(kindWord(kind).orElse(FaceKind.SEALED)));
+      } else if (iface) {
+        nk_label(ctx, "interface (joins its parts)", NK_TEXT_LEFT);
+      } else {
+        unset++;
+        w.label("no entry: sealed by default", 0xa07800);
+      }
+    }
+    if (unset > 0) {
+      nk_layout_row_dynamic(ctx, 34, 1);
+      nk_label_wrap(
+          ctx,
+          unset
+              + " exterior group(s) have no entry and are sealed by default (yellow in the view);"
+              + " give them a kind, or \"sealed\" to say you mean it.");
+    }
+    List<String> chosen = sel.groups();
+    nk_layout_row_dynamic(ctx, 20, 1);
+    nk_label(
+        ctx,
+        chosen.isEmpty()
+            ? "Select face groups to give them a kind"
+            : "Selected: " + String.join(", ", chosen),
+        NK_TEXT_LEFT);
+    if (chosen.isEmpty()) {
+      return;
+    }
+    nk_layout_row_dynamic(ctx, 22, 3);
+    for (FaceKind k : FaceEdits.kinds()) {
+      if (w.button(k.word())) {
+        faces.kind(chosen, k);
+      }
+    }
+    if (w.button("no entry")) {
+      faces.clear(chosen);
+    }
+    String kind = faces.kindOf(chosen.get(0));
+    for (String g : chosen) {
+      if (!faces.kindOf(g).equals(kind)) {
+        nk_layout_row_dynamic(ctx, 20, 1);
+        nk_label(ctx, "the selected groups differ in kind: give them one", NK_TEXT_LEFT);
+        return;
+      }
+    }
+    Optional<DraftCheck> check = s.check();
+    if (kind.equals("exchange")) {
+      value(d, faces, chosen, "coefficient", "coefficient h, m/s", check);
+    }
+    if (kind.equals("concentration") || kind.equals("flux") || kind.equals("exchange")) {
+      String unit =
+          kind.equals("flux")
+              ? "inward flux, amount/(m²·s)"
+              : kind.equals("exchange") ? "environment concentration" : "held concentration";
+      value(d, faces, chosen, "value", unit, check);
+    }
+    if (kind.equals("ambient")) {
+      nk_layout_row_dynamic(ctx, 34, 1);
+      nk_label_wrap(ctx, "takes the exposure's potential (see Exposure): nothing to set here");
+    }
+    for (String g : chosen) {
+      check.ifPresent(c -> w.problems(c.about(FaceEdits.path(g))));
+    }
+  }
+
+  private void value(
+      CaseDraft d,
+      FaceEdits faces,
+      List<String> chosen,
+      String key,
+      String what,
+      Optional<DraftCheck> check) {
+    var ctx = w.ctx();
+    String first = chosen.get(0);
+    JsonNode v = faces.entry(first).path(key);
+    nk_layout_row_dynamic(ctx, 20, 1);
+    nk_label(ctx, what, NK_TEXT_LEFT);
+    if (!v.isArray() || chosen.size() > 1) {
+      nk_layout_row_dynamic(ctx, 22, 2);
+      w.field(key, CaseValues.text(v)).ifPresent(t -> faces.value(chosen, key, t));
+      if (chosen.size() == 1 && w.button(key + " as table", "time table")) {
+        faces.tableOrConstant(first, key, true, d.tree().path("time").path("end"));
+      }
+      return;
+    }
+    for (int r = 0; r < v.size(); r++) {
+      nk_layout_row_dynamic(ctx, 22, 3);
+      int row = r;
+      w.field(key + " t" + r, CaseValues.text(v.get(r).path(0)))
+          .ifPresent(t -> faces.cell(first, key, row, 0, t));
+      w.field(key + " v" + r, CaseValues.text(v.get(r).path(1)))
+          .ifPresent(t -> faces.cell(first, key, row, 1, t));
+      if (w.button(key + " remove " + r, "remove")) {
+        faces.removeRow(first, key, row);
+      }
+    }
+    nk_layout_row_dynamic(ctx, 22, 2);
+    if (w.button(key + " add row", "add row")) {
+      faces.addRow(first, key);
+    }
+    if (w.button(key + " as constant", "constant")) {
+      faces.tableOrConstant(first, key, false, d.tree().path("time").path("end"));
+    }
+    check
+        .flatMap(c -> c.spec())
+        .map(spec -> spec.faces().get(first))
+        .ifPresent(
+            f -> {
+              var table = key.equals("value") ? f.value() : f.coefficient();
+              double[] b = table.breakpoints();
+              if (b.length >= 2) {
+                double[] y = new double[40];
+                double lo = Double.POSITIVE_INFINITY;
+                double hi = Double.NEGATIVE_INFINITY;
+                for (int i = 0; i < y.length; i++) {
+                  y[i] = table.at(b[0] + (b[b.length - 1] - b[0]) * i / (y.length - 1.0));
+                  lo = Math.min(lo, y[i]);
+                  hi = Math.max(hi, y[i]);
+                }
+                nk_layout_row_dynamic(ctx, 80, 1);
+                try (var stack = org.lwjgl.system.MemoryStack.stackPush()) {
+                  NkCharts.lines(ctx, stack, List.of(y), Math.min(0, lo), hi > lo ? hi : lo + 1);
+                }
+              }
+            });
+  }
+
+  static Optional<FaceKind> kindWord(String word) {
+    for (FaceKind k : FaceKind.values()) {
+      if (k.word().equals(word)) {
+        return Optional.of(k);
+      }
+    }
+    return Optional.empty();
+  }
+}

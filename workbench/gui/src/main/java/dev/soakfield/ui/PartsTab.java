@@ -1,0 +1,161 @@
+package dev.soakfield.ui;
+
+import static org.lwjgl.nuklear.Nuklear.*;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import dev.soakfield.app.setup.CaseDraft;
+import dev.soakfield.app.setup.CaseText;
+import dev.soakfield.app.setup.CaseValues;
+import dev.soakfield.app.setup.DraftCheck;
+import dev.soakfield.app.setup.MaterialEdits;
+import dev.soakfield.app.setup.SetupSession;
+import dev.soakfield.app.setup.TreePath;
+import dev.soakfield.fem.laws.LawEntry;
+import dev.soakfield.law.api.LawParameter;
+import dev.soakfield.mesh.VolumeGroup;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.function.Supplier;
+
+/**
+ * The "Parts" tab: each volume group's material — diffusivity (constant, Arrhenius or orthotropic
+ * with axes), solubility, density and a source law from the catalog with its parameters' units,
+ * defaults and ranges.
+ */
+final class PartsTab {
+  private final Widgets w;
+  private final Supplier<SetupSession> session;
+
+  PartsTab(Widgets w, Supplier<SetupSession> session) {
+    this.w = w;
+    this.session = session;
+  }
+
+  void draw() {
+    var ctx = w.ctx();
+    SetupSession s = session.get();
+    nk_layout_row_dynamic(ctx, 20, 1);
+    if (s.draft().isEmpty()) {
+      nk_label(
+          ctx, "no case open: open a mesh or a case to give its parts materials", NK_TEXT_LEFT);
+      return;
+    }
+    CaseDraft d = s.draft().get();
+    MaterialEdits m = new MaterialEdits(d);
+    nk_label(ctx, "Parts (volume groups)", NK_TEXT_LEFT);
+    for (VolumeGroup g : d.mesh().volumeGroups()) {
+      nk_layout_row_dynamic(ctx, 20, 2);
+      w.place("part " + g.name());
+      if (nk_option_label(ctx, g.name(), g.name().equals(s.part()))) {
+        s.part(g.name());
+      }
+      nk_label(ctx, m.entry(g.name()).isMissingNode() ? "no material yet" : "", NK_TEXT_LEFT);
+    }
+    String part = s.part();
+    Optional<DraftCheck> check = s.check();
+    JsonNode e = m.entry(part);
+    nk_layout_row_dynamic(ctx, 22, 1);
+    if (e.isMissingNode()) {
+      if (w.button("give " + part + " a material")) {
+        m.fromLibrary(
+            part,
+            "starting values",
+            CaseText.parse(
+                "{\"diffusivity\": 1e-12, \"solubility\": 1}", d.caseFile(), "material"));
+      }
+      return;
+    }
+    coefficient(m, part, "diffusivity", "D, m²/s", true);
+    coefficient(m, part, "solubility", "S (c = S·potential)", false);
+    w.labelled("density", "density", CaseValues.text(e.path("density")), 0.35f)
+        .ifPresent(t -> m.value(part, TreePath.of("density"), t));
+    source(m, part, e.path("source"));
+    check.ifPresent(c -> w.problems(c.about(MaterialEdits.path(part))));
+  }
+
+  private void coefficient(MaterialEdits m, String part, String key, String what, boolean axes) {
+    var ctx = w.ctx();
+    nk_layout_row_dynamic(ctx, 20, 1);
+    nk_label(ctx, key + ": " + what, NK_TEXT_LEFT);
+    MaterialEdits.Form form = m.form(part, key);
+    nk_layout_row_dynamic(ctx, 20, axes ? 3 : 2);
+    for (MaterialEdits.Form f : MaterialEdits.Form.values()) {
+      if (f == MaterialEdits.Form.ORTHOTROPIC && !axes) {
+        continue;
+      }
+      w.place(key + " " + f);
+      if (nk_option_label(ctx, f.name().toLowerCase(Locale.ROOT), f == form) && f != form) {
+        m.form(part, key, f);
+      }
+    }
+    JsonNode v = m.entry(part).path(key);
+    switch (form) {
+      case CONSTANT ->
+          w.labelled("value", key, CaseValues.text(v), 0.35f)
+              .ifPresent(t -> m.value(part, TreePath.of(key), t));
+      case ARRHENIUS -> {
+        String pre = axes ? "D0" : "S0";
+        String energy = axes ? "Q" : "dH";
+        w.labelled(pre, key + pre, CaseValues.text(v.path(pre)), 0.35f)
+            .ifPresent(t -> m.value(part, TreePath.of(key, pre), t));
+        w.labelled(
+                energy + " (J/mol, or kJ/mol)",
+                key + energy,
+                CaseValues.text(v.path(energy)),
+                0.35f)
+            .ifPresent(t -> m.value(part, TreePath.of(key, energy), t));
+      }
+      case ORTHOTROPIC -> {
+        for (int i = 0; i < 3; i++) {
+          int k = i;
+          w.labelled(
+                  "D" + (i + 1), key + "p" + i, CaseValues.text(v.path("principal").path(i)), 0.35f)
+              .ifPresent(t -> m.value(part, TreePath.of(key, "principal", k), t));
+          w.labelled(
+                  "axis " + (i + 1), key + "a" + i, CaseValues.text(v.path("axes").path(i)), 0.35f)
+              .ifPresent(t -> m.value(part, TreePath.of(key, "axes", k), t));
+        }
+      }
+    }
+  }
+
+  private void source(MaterialEdits m, String part, JsonNode source) {
+    var ctx = w.ctx();
+    String law = source.path("law").asText("");
+    nk_layout_row_dynamic(ctx, 20, 1);
+    nk_label(ctx, "source law: " + (law.isEmpty() ? "none" : law), NK_TEXT_LEFT);
+    nk_layout_row_dynamic(ctx, 22, 3);
+    if (w.button("source none", "none")) {
+      m.noSource(part);
+    }
+    for (LawEntry entry : session.get().catalog().entries()) {
+      String id = entry.provider().id();
+      if (w.button("source " + id, id)) {
+        m.sourceLaw(part, id, entry.provider().parameters());
+      }
+    }
+    session.get().catalog().find(law).ifPresent(entry -> parameters(m, part, entry, source));
+  }
+
+  private void parameters(MaterialEdits m, String part, LawEntry entry, JsonNode source) {
+    var ctx = w.ctx();
+    nk_layout_row_dynamic(ctx, 34, 1);
+    nk_label_wrap(ctx, entry.provider().description());
+    for (LawParameter p : entry.provider().parameters()) {
+      nk_layout_row_dynamic(ctx, 18, 1);
+      nk_label(
+          ctx,
+          String.format(
+              Locale.ROOT,
+              "%s [%s] %s, %s…%s",
+              p.name(),
+              p.unit(),
+              p.isRequired() ? "required" : "default " + p.defaultValue(),
+              p.minimum(),
+              p.maximum()),
+          NK_TEXT_LEFT);
+      w.labelled("  value", "law " + p.name(), CaseValues.text(source.path(p.name())), 0.35f)
+          .ifPresent(t -> m.value(part, TreePath.of("source", p.name()), t));
+    }
+  }
+}

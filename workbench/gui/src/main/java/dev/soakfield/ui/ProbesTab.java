@@ -1,0 +1,58 @@
+package dev.soakfield.ui;
+
+import static org.lwjgl.nuklear.Nuklear.*;
+
+import dev.soakfield.app.setup.CaseDraft;
+import dev.soakfield.app.setup.CaseValues;
+import dev.soakfield.app.setup.ProbeEdits;
+import dev.soakfield.app.setup.SetupSession;
+import dev.soakfield.app.setup.TreePath;
+import java.util.function.Supplier;
+
+/** The "Probes" tab: named points, placed by clicking on the part (or the cut) or typed in. */
+final class ProbesTab {
+  private final Widgets w;
+  private final Supplier<SetupSession> session;
+
+  ProbesTab(Widgets w, Supplier<SetupSession> session) {
+    this.w = w;
+    this.session = session;
+  }
+
+  void draw() {
+    var ctx = w.ctx();
+    SetupSession s = session.get();
+    nk_layout_row_dynamic(ctx, 34, 1);
+    if (s.draft().isEmpty()) {
+      nk_label(ctx, "no case open", NK_TEXT_LEFT);
+      return;
+    }
+    CaseDraft d = s.draft().get();
+    ProbeEdits probes = new ProbeEdits(d);
+    nk_label_wrap(
+        ctx,
+        "Click on the part to place a probe there (with a section on, on the cut); coordinates in"
+            + " metres, or with a unit (\"2 mm\").");
+    for (String name : probes.names()) {
+      nk_layout_row_dynamic(ctx, 22, 3);
+      w.field("probe name " + name, name).ifPresent(t -> probes.rename(name, t));
+      w.field("probe at " + name, CaseValues.text(probes.point(name)))
+          .ifPresent(t -> d.set(TreePath.of("probes", name), t));
+      if (w.button("remove probe " + name, "remove")) {
+        probes.remove(name);
+      }
+    }
+    nk_layout_row_dynamic(ctx, 22, 1);
+    if (w.button("add a probe at the centre")) {
+      double[] b = s.study().geometry().bounds();
+      probes.add((b[0] + b[3]) / 2, (b[1] + b[4]) / 2, (b[2] + b[5]) / 2);
+    }
+    s.check().ifPresent(c -> w.problems(c.about(TreePath.of("probes"))));
+    s.check()
+        .ifPresent(
+            c ->
+                c.warnings().stream()
+                    .filter(m -> m.contains("probe"))
+                    .forEach(m -> w.problems(java.util.List.of(m))));
+  }
+}

@@ -1,0 +1,36 @@
+package dev.soakfield.ui;
+
+import static org.lwjgl.nuklear.Nuklear.*;
+
+/**
+ * The line under the time strip: what the mouse does in the current mode, then the last message.
+ */
+final class StatusLine {
+  private StatusLine() {}
+
+  static String mouse(CasePanel.Mode mode) {
+    return switch (mode) {
+      case PICK_FACES ->
+          "Faces: click a face group to select it, Shift+click to add or drop one; drag turns,"
+              + " right drag moves, wheel zooms";
+      case PLACE_PROBES ->
+          "Probes: click on the part (or on the cut) to place a probe; drag turns, right drag"
+              + " moves, wheel zooms";
+      case LOOK ->
+          "Look: click on the part to see its face group and the value there through time; drag"
+              + " turns, right drag moves, wheel zooms";
+    };
+  }
+
+  static void draw(org.lwjgl.nuklear.NkContext ctx, Widgets w, Workbench wb) {
+    nk_layout_row_dynamic(ctx, 18, 1);
+    String hover = wb.model().probe().hover();
+    w.place("status");
+    nk_label(
+        ctx, mouse(wb.casePanel().mode()) + (hover.isEmpty() ? "" : "  |  " + hover), NK_TEXT_LEFT);
+    String m = wb.actions().message();
+    if (!m.isEmpty()) {
+      w.label(m, wb.actions().messageIsError() ? 0xb02020 : 0x205020);
+    }
+  }
+}
