@@ -80,7 +80,14 @@ final class NuklearBackend implements AutoCloseable {
   private final NkDrawNullTexture nullTexture = NkDrawNullTexture.create();
   private final ByteBuffer ttf;
   private final STBTTFontinfo fontInfo = STBTTFontinfo.create();
-  private final STBTTPackedchar.Buffer glyphs = STBTTPackedchar.create(95);
+
+  /**
+   * The code points baked into the atlas, as (first, count) ranges: Latin-1 (units such as m², °C,
+   * µm, ×, ·), dashes, quotes and the ellipsis, arrows, and ≤ ≥; others draw as '?'.
+   */
+  private static final int[][] RANGES = {{32, 224}, {0x2010, 24}, {0x2190, 4}, {0x2264, 2}};
+
+  private final STBTTPackedchar.Buffer[] glyphs = new STBTTPackedchar.Buffer[RANGES.length];
   private final int program;
   private final int vao;
   private final int vbo;
@@ -155,7 +162,10 @@ final class NuklearBackend implements AutoCloseable {
       STBTTPackContext pc = STBTTPackContext.malloc(stack);
       stbtt_PackBegin(pc, bitmap, ATLAS, ATLAS, 0, 1, NULL);
       stbtt_PackSetOversampling(pc, 2, 2);
-      stbtt_PackFontRange(pc, ttf, 0, FONT_HEIGHT, 32, glyphs);
+      for (int r = 0; r < RANGES.length; r++) {
+        glyphs[r] = STBTTPackedchar.create(RANGES[r][1]);
+        stbtt_PackFontRange(pc, ttf, 0, FONT_HEIGHT, RANGES[r][0], glyphs[r]);
+      }
       stbtt_PackEnd(pc);
       glBindTexture(GL_TEXTURE_2D, tex);
       glPixelStorei(GL_UNPACK_ALIGNMENT, 1);
@@ -180,7 +190,8 @@ final class NuklearBackend implements AutoCloseable {
                   if (step == 0 || unicode.get(0) == NK_UTF_INVALID) {
                     break;
                   }
-                  stbtt_GetCodepointHMetrics(fontInfo, unicode.get(0), advance, null);
+                  int cp = baked(unicode.get(0)) ? unicode.get(0) : '?';
+                  stbtt_GetCodepointHMetrics(fontInfo, cp, advance, null);
                   width += advance.get(0) * s;
                   used += step;
                 }
@@ -195,8 +206,9 @@ final class NuklearBackend implements AutoCloseable {
                 FloatBuffer y = stack.floats(0f);
                 STBTTAlignedQuad q = STBTTAlignedQuad.malloc(stack);
                 IntBuffer advance = stack.mallocInt(1);
-                int cp = codepoint >= 32 && codepoint < 127 ? codepoint : '?';
-                stbtt_GetPackedQuad(glyphs, ATLAS, ATLAS, cp - 32, x, y, q, false);
+                int cp = baked(codepoint) ? codepoint : '?';
+                int r = rangeOf(cp);
+                stbtt_GetPackedQuad(glyphs[r], ATLAS, ATLAS, cp - RANGES[r][0], x, y, q, false);
                 stbtt_GetCodepointHMetrics(fontInfo, cp, advance, null);
                 NkUserFontGlyph g = NkUserFontGlyph.create(glyph);
                 g.width(q.x1() - q.x0());
@@ -209,6 +221,19 @@ final class NuklearBackend implements AutoCloseable {
             })
         .texture(t -> t.id(tex));
     return tex;
+  }
+
+  private static int rangeOf(int cp) {
+    for (int r = 0; r < RANGES.length; r++) {
+      if (cp >= RANGES[r][0] && cp < RANGES[r][0] + RANGES[r][1]) {
+        return r;
+      }
+    }
+    return -1;
+  }
+
+  private static boolean baked(int cp) {
+    return cp != 127 && rangeOf(cp) >= 0;
   }
 
   private static int makeProgram() {
