@@ -63,6 +63,6 @@ public final class FieldPictures {
     settings.frame(results.frameCount() - 1);
     settings.section(section);
     ViewPicture.write(
-        maker, study, settings, OrbitCamera.View.ISO, WIDTH, HEIGHT, "case units", file);
+        maker, study, settings, OrbitCamera.View.ISO, WIDTH, HEIGHT, "amount/m^3", file);
   }
 }

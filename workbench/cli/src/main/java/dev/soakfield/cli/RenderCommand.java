@@ -85,7 +85,7 @@ final class RenderCommand implements Callable<Integer> {
 
   @Option(
       names = "--unit",
-      defaultValue = "case units",
+      defaultValue = "amount/m^3",
       paramLabel = "TEXT",
       description = "Unit of c and phi for the colour bar, e.g. kg/m3 (default: ${DEFAULT-VALUE}).")
   String unit;

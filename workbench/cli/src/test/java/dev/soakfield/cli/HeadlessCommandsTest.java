@@ -61,6 +61,34 @@ class HeadlessCommandsTest {
   }
 
   @Test
+  void withNoCommandAHeadlessBuildListsTheCommands() {
+    CliRun none = CliRun.of();
+    assertEquals(ExitCodes.OK, none.exitCode(), none.err());
+    assertTrue(none.out().contains("Usage: soakfield"), none.out());
+    assertTrue(none.out().contains("gui"), none.out());
+  }
+
+  @Test
+  void theDemoCopyForTheWindowKeepsAnEditedCase() throws Exception {
+    Path folder = dir.resolve("demo");
+    Path demoCase = DemoFiles.copyInto(folder, true);
+    assertEquals(folder.resolve("sensor-pod.case.json"), demoCase);
+    String edited =
+        java.nio.file.Files.readString(demoCase)
+            .replace("\"threshold\": 0.5", "\"threshold\": 0.6");
+    assertTrue(edited.contains("0.6"));
+    java.nio.file.Files.writeString(demoCase, edited);
+    DemoFiles.copyInto(folder, true);
+    assertEquals(edited, java.nio.file.Files.readString(demoCase));
+    assertTrue(java.nio.file.Files.isRegularFile(folder.resolve("sensor-pod.msh")));
+    // the demo declares every exterior face group: nothing is sealed only by default
+    CliRun check = CliRun.of("check", folder.resolve("sensor-pod.case.json").toString());
+    assertEquals(ExitCodes.OK, check.exitCode(), check.err());
+    assertTrue(!check.out().contains("sealed by default"), check.out());
+    assertTrue(DemoFiles.windowCopy().startsWith(System.getProperty("user.home")));
+  }
+
+  @Test
   void guiAndRenderSayThisBuildHasNoWindow() throws Exception {
     CliRun gui = CliRun.of("gui");
     assertEquals(ExitCodes.BAD_INPUT, gui.exitCode(), gui.err());

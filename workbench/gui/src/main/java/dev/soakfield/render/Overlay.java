@@ -4,6 +4,7 @@ import dev.soakfield.app.Annotations;
 import dev.soakfield.app.ColourMap;
 import dev.soakfield.app.FieldKind;
 import dev.soakfield.app.OrbitCamera;
+import dev.soakfield.app.RoundTicks;
 import dev.soakfield.app.Scene;
 import java.nio.ByteBuffer;
 import java.nio.charset.StandardCharsets;
@@ -174,12 +175,10 @@ final class Overlay {
     line(b[2] + 1, b[1] - 1, b[2] + 1, b[3] + 1, 1.5f, ink);
     double lo = scene.low();
     double hi = scene.high();
-    int ticks = 5;
-    for (int i = 0; i < ticks; i++) {
-      double f = i / (double) (ticks - 1);
+    for (double value : RoundTicks.within(lo, hi, 4)) {
+      double f = hi > lo ? (value - lo) / (hi - lo) : 0;
       float y = (float) (b[3] - f * (b[3] - b[1]));
       line(b[2] + 1, y, b[2] + 6, y, 1.5f, ink);
-      double value = lo + f * (hi - lo);
       String label =
           field == FieldKind.FIRST_EXCEED ? Annotations.time(value) : Annotations.number(value);
       text(b[2] + 9, y - 5, label, ink);

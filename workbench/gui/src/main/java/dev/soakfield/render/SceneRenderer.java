@@ -97,7 +97,7 @@ public final class SceneRenderer implements AutoCloseable {
   private final int overlayVbo;
   private final Overlay overlay = new Overlay();
   private int uploaded = -1;
-  private String unit = "case units";
+  private String unit = "amount/m^3";
 
   /** Creates the programs and buffers in the current context. */
   public SceneRenderer() {

@@ -124,6 +124,29 @@ final class NuklearBackend implements AutoCloseable {
     nullTexture.uv().set(0.5f, 0.5f);
     fontTexture = bakeFont();
     nk_style_set_font(ctx, font);
+    toggleLook(ctx);
+  }
+
+  /** A lit mark on a dark box: Nuklear's stock toggles draw "on" darker than "off". */
+  static final int TOGGLE_ON = 0xe8c45a;
+
+  /** The box of a check box or option that is off. */
+  static final int TOGGLE_OFF = 0x323232;
+
+  private static void toggleLook(NkContext ctx) {
+    for (org.lwjgl.nuklear.NkStyleToggle t :
+        new org.lwjgl.nuklear.NkStyleToggle[] {ctx.style().checkbox(), ctx.style().option()}) {
+      setColour(t.normal(), TOGGLE_OFF);
+      setColour(t.hover(), 0x464646);
+      setColour(t.active(), 0x464646);
+      setColour(t.cursor_normal(), TOGGLE_ON);
+      setColour(t.cursor_hover(), 0xf2d27a);
+    }
+  }
+
+  private static void setColour(org.lwjgl.nuklear.NkStyleItem item, int rgb) {
+    item.type(NK_STYLE_ITEM_COLOR);
+    item.data().color().set((byte) (rgb >> 16), (byte) (rgb >> 8), (byte) rgb, (byte) 255);
   }
 
   private static ByteBuffer loadFont() {
