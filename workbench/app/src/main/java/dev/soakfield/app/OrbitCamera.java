@@ -55,6 +55,14 @@ public final class OrbitCamera {
   private int width = 800;
   private int height = 600;
 
+  /** The unit vector from the target towards the eye of a standard view. */
+  public static double[] towards(View v) {
+    OrbitCamera c = new OrbitCamera();
+    c.look(v);
+    Vector3d e = c.towardsEye();
+    return new double[] {e.x, e.y, e.z};
+  }
+
   /** Takes another camera's view (target, angles, zoom), keeping this one's picture size. */
   public void copyFrom(OrbitCamera o) {
     target.set(o.target);

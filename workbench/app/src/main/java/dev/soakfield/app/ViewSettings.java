@@ -30,6 +30,15 @@ public final class ViewSettings {
     }
 
     /**
+     * The same plane oriented so that its cut faces a viewer looking along {@code -towardsEye}: the
+     * part on the side of {@code n} is taken away, so {@code n} must point towards the eye.
+     */
+    public Plane facing(double[] towardsEye) {
+      double d = nx * towardsEye[0] + ny * towardsEye[1] + nz * towardsEye[2];
+      return d >= 0 ? this : new Plane(-nx, -ny, -nz, -offset);
+    }
+
+    /**
      * The plane of a command-line text AXIS:POS, e.g. {@code x:0.004} (x = 0.004 m).
      *
      * @throws IllegalArgumentException naming the text and what was expected

@@ -114,6 +114,8 @@ final class RenderCommand implements Callable<Integer> {
     } catch (IllegalArgumentException e) {
       throw new UserInputException("--view: " + e.getMessage());
     }
+    // the cut faces the viewer: the half of the part nearer the viewer is the one taken away
+    settings.section(settings.section().map(p -> p.facing(OrbitCamera.towards(side))));
     Scene scene = ViewPicture.write(pictures, study, settings, side, wh[0], wh[1], unit, out);
     PrintWriter o = spec.commandLine().getOut();
     o.println("picture: " + out + " (" + wh[0] + "x" + wh[1] + ")");

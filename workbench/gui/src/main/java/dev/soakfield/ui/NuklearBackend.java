@@ -131,14 +131,14 @@ final class NuklearBackend implements AutoCloseable {
   static final int TOGGLE_ON = 0xe8c45a;
 
   /** The box of a check box or option that is off. */
-  static final int TOGGLE_OFF = 0x323232;
+  static final int TOGGLE_OFF = 0x5c5c5c;
 
   private static void toggleLook(NkContext ctx) {
     for (org.lwjgl.nuklear.NkStyleToggle t :
         new org.lwjgl.nuklear.NkStyleToggle[] {ctx.style().checkbox(), ctx.style().option()}) {
       setColour(t.normal(), TOGGLE_OFF);
-      setColour(t.hover(), 0x464646);
-      setColour(t.active(), 0x464646);
+      setColour(t.hover(), 0x6e6e6e);
+      setColour(t.active(), 0x6e6e6e);
       setColour(t.cursor_normal(), TOGGLE_ON);
       setColour(t.cursor_hover(), 0xf2d27a);
     }

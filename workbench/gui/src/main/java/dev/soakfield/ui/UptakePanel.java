@@ -3,11 +3,13 @@ package dev.soakfield.ui;
 import static org.lwjgl.nuklear.Nuklear.*;
 
 import dev.soakfield.app.Annotations;
+import dev.soakfield.app.FaceGroupPalette;
 import dev.soakfield.app.ProbeSelection;
 import dev.soakfield.app.Resample;
 import dev.soakfield.app.WorkbenchModel;
 import dev.soakfield.fem.results.Series;
 import dev.soakfield.fem.results.StoredRun;
+import dev.soakfield.report.TimeAxis;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -38,26 +40,27 @@ final class UptakePanel {
       amounts(stack, series.get());
     }
     if (probe.probe().isPresent()) {
-      probe(stack, probe);
+      probe(probe);
     }
   }
 
   private void amounts(MemoryStack stack, Series s) {
     double[] t = s.require("time");
-    nk_label(ctx, "Amount per part against time", NK_TEXT_LEFT);
-    nk_label(ctx, "0 .. " + Annotations.time(t[t.length - 1]), NK_TEXT_LEFT);
+    TimeAxis axis = TimeAxis.forEnd(t[t.length - 1]);
     List<String> parts = s.suffixes("amount:");
-    List<double[]> curves = new ArrayList<>();
-    double max = 0;
-    for (String p : parts) {
-      double[] y = Resample.even(t, s.require("amount:" + p), 60);
-      curves.add(y);
-      for (double v : y) {
-        max = Math.max(max, v);
-      }
+    double[] x = new double[60];
+    for (int i = 0; i < x.length; i++) {
+      x[i] = t[t.length - 1] * i / (x.length - 1.0) / axis.seconds();
     }
-    nk_layout_row_dynamic(ctx, 150, 1);
-    NkCharts.lines(ctx, stack, curves, 0, max > 0 ? max : 1);
+    List<double[]> curves = new ArrayList<>();
+    int[] colours = new int[parts.size()];
+    for (int i = 0; i < parts.size(); i++) {
+      curves.add(Resample.even(t, s.require("amount:" + parts.get(i)), x.length));
+      colours[i] = FaceGroupPalette.colourOf(i);
+    }
+    nk_layout_row_dynamic(ctx, 20, 1);
+    nk_label(ctx, "Amount per part against time", NK_TEXT_LEFT);
+    AxesPlot.draw(ctx, 190, x, curves, colours, "time [" + axis.unit() + "]", "amount");
     nk_layout_row_dynamic(ctx, 18, 1);
     for (int i = 0; i < parts.size(); i++) {
       nk_label_colored(
@@ -68,7 +71,7 @@ final class UptakePanel {
     }
   }
 
-  private void probe(MemoryStack stack, ProbeSelection probe) {
+  private void probe(ProbeSelection probe) {
     double[] p = probe.probe().get().point();
     nk_layout_row_dynamic(ctx, 20, 1);
     nk_label(ctx, "Probe", NK_TEXT_LEFT);
@@ -93,8 +96,20 @@ final class UptakePanel {
           ctx,
           "range " + Annotations.number(lo) + " .. " + Annotations.number(hi) + " over the frames",
           NK_TEXT_LEFT);
-      nk_layout_row_dynamic(ctx, 120, 1);
-      NkCharts.lines(ctx, stack, List.of(v), Math.min(0, lo), hi > lo ? hi : lo + 1);
+      StoredRun r = model.study().results().orElseThrow();
+      double[] times = new double[v.length];
+      TimeAxis axis = TimeAxis.forEnd(r.time(v.length - 1));
+      for (int f = 0; f < v.length; f++) {
+        times[f] = r.time(f) / axis.seconds();
+      }
+      AxesPlot.draw(
+          ctx,
+          150,
+          times,
+          List.of(v),
+          new int[] {0xe8c45a},
+          "time [" + axis.unit() + "] (the frames)",
+          model.settings().field().map(k -> k.words).orElse("value"));
     }
   }
 

@@ -50,6 +50,46 @@ class RenderCommandTest {
   }
 
   @Test
+  void aSectionFromTheDefaultViewTakesAwayTheHalfNearTheViewerSoTheCutShows() throws Exception {
+    GlAvailable.orSkip();
+    Path results = SoakedBox.make(dir);
+    Path pic = dir.resolve("cut.png");
+    CliRun r =
+        CliRun.of(
+            "render",
+            results.toString(),
+            "--section",
+            "y:5mm",
+            "--size",
+            "400x300",
+            "--out",
+            pic.toString());
+    assertEquals(0, r.exitCode(), r.err());
+    BufferedImage img = ImageIO.read(pic.toFile());
+    // the default (iso) view looks from -y: the half y < 5 mm must go, showing the cut at y = 5 mm
+    dev.soakfield.app.OrbitCamera cam = new dev.soakfield.app.OrbitCamera();
+    cam.look(dev.soakfield.app.OrbitCamera.View.ISO);
+    cam.viewport(400, 300);
+    cam.fit(new double[] {0, 0, 0, 0.01, 0.01, 0.004});
+    double[] skin = cam.toPixel(0.0075, 0.0, 0.001); // the ymin skin, now taken away
+    double[] cut = cam.toPixel(0.0075, 0.005, 0.002); // the middle of the cut
+    int background = dev.soakfield.render.SceneRenderer.BACKGROUND;
+    assertEquals(background, img.getRGB((int) skin[0], (int) skin[1]) & 0xffffff);
+    // on the cut, the field's colour at x = 7.5 mm: c rises towards the held xmin face, so the
+    // cut there is darker than at x = 2.5 mm on the ramp (ColourMap: dark at low values)
+    double[] nearHeld = cam.toPixel(0.0025, 0.005, 0.002);
+    int far = img.getRGB((int) cut[0], (int) cut[1]) & 0xffffff;
+    int near = img.getRGB((int) nearHeld[0], (int) nearHeld[1]) & 0xffffff;
+    assertTrue(far != background && near != background);
+    assertTrue(
+        luma(far) < luma(near), Integer.toHexString(far) + " vs " + Integer.toHexString(near));
+  }
+
+  private static double luma(int rgb) {
+    return 0.3 * ((rgb >> 16) & 0xff) + 0.59 * ((rgb >> 8) & 0xff) + 0.11 * (rgb & 0xff);
+  }
+
+  @Test
   void badOptionsAreNamedAndNothingIsWritten() throws Exception {
     GlAvailable.orSkip();
     Path results = SoakedBox.make(dir);

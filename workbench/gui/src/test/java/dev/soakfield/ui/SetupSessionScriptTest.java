@@ -119,6 +119,12 @@ class SetupSessionScriptTest {
       // a plain click on the top alone selects just it again
       click(wb, tx, top[1], false);
       assertEquals(List.of("zmax"), session.selection().groups());
+      // the list is in step, and a check box that is on looks on: lit mark in the box's middle
+      BufferedImage list = wb.read();
+      assertEquals(
+          NuklearBackend.TOGGLE_ON, boxMiddle(list, wb.widget("group zmax").orElseThrow()));
+      assertEquals(
+          NuklearBackend.TOGGLE_OFF, boxMiddle(list, wb.widget("group xmin").orElseThrow()));
 
       // make it a concentration face holding 2.5; ymin keeps no entry (sealed by default)
       press(wb, "concentration");
@@ -220,6 +226,12 @@ class SetupSessionScriptTest {
     List<String> cli = Files.readAllLines(cliOut.resolve("series.csv"));
     assertEquals(window, cli);
     assertTrue(window.size() > 2);
+  }
+
+  /** The colour in the middle of a check box, drawn square at the left of its row. */
+  private static int boxMiddle(BufferedImage img, float[] row) {
+    double side = Math.min(row[3], 16);
+    return rgbAt(img, row[0] + 2 + side / 2, row[1] + row[3] / 2);
   }
 
   /** Whether a shaded pixel is the colour times a light factor in [0.5, 1] (flat shading). */
