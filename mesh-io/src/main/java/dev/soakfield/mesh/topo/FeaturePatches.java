@@ -22,14 +22,25 @@ final class FeaturePatches {
    */
   static FeaturePatches split(
       double[] xyz, int[] tets, int nodesPerTet, int[] faceRefs, double featureAngleDeg) {
-    int m = faceRefs.length;
-    double[] normal = new double[3 * m];
-    boolean[] hasNormal = new boolean[m];
-    int[] corner = new int[3 * m];
-    for (int e = 0; e < m; e++) {
+    int[] corner = new int[3 * faceRefs.length];
+    for (int e = 0; e < faceRefs.length; e++) {
       for (int k = 0; k < 3; k++) {
         corner[3 * e + k] = TetFaces.corner(tets, nodesPerTet, faceRefs[e], k);
       }
+    }
+    return ofTriangles(xyz, corner, featureAngleDeg);
+  }
+
+  /**
+   * Splits triangles given by their corner nodes (three a triangle, consistently oriented).
+   *
+   * @param corner node indices, 3 per triangle
+   */
+  static FeaturePatches ofTriangles(double[] xyz, int[] corner, double featureAngleDeg) {
+    int m = corner.length / 3;
+    double[] normal = new double[3 * m];
+    boolean[] hasNormal = new boolean[m];
+    for (int e = 0; e < m; e++) {
       hasNormal[e] =
           TetShape.unitNormal(
               xyz, corner[3 * e], corner[3 * e + 1], corner[3 * e + 2], normal, 3 * e);

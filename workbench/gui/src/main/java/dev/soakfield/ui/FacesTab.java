@@ -8,6 +8,7 @@ import dev.soakfield.app.setup.CaseValues;
 import dev.soakfield.app.setup.DraftCheck;
 import dev.soakfield.app.setup.FaceEdits;
 import dev.soakfield.app.setup.FaceSelection;
+import dev.soakfield.app.setup.GroupEdits;
 import dev.soakfield.app.setup.KindColours;
 import dev.soakfield.app.setup.SetupSession;
 import dev.soakfield.fem.physics.FaceKind;
@@ -25,6 +26,7 @@ import java.util.function.Supplier;
 final class FacesTab {
   private final Widgets w;
   private final Supplier<SetupSession> session;
+  private String angle = "30";
 
   FacesTab(Widgets w, Supplier<SetupSession> session) {
     this.w = w;
@@ -72,6 +74,7 @@ final class FacesTab {
               + " give them a kind, or \"sealed\" to say you mean it.");
     }
     List<String> chosen = sel.groups();
+    groupTools(d, chosen);
     nk_layout_row_dynamic(ctx, 20, 1);
     nk_label(
         ctx,
@@ -180,6 +183,47 @@ final class FacesTab {
               }
             });
   }
+
+  /** Split one selected group at sharp edges, or rename it. */
+  private void groupTools(CaseDraft d, List<String> chosen) {
+    var ctx = w.ctx();
+    if (chosen.size() != 1) {
+      return;
+    }
+    String g = chosen.get(0);
+    GroupEdits edits = new GroupEdits(d);
+    nk_layout_row_dynamic(ctx, 22, 3);
+    nk_label(ctx, "feature angle, °", NK_TEXT_LEFT);
+    w.field("split angle", angle).ifPresent(t -> angle = t);
+    if (w.button("split " + g, "split at edges")) {
+      try {
+        int n = edits.split(g, Double.parseDouble(angle.strip()));
+        session.get().selection().click(null);
+        note = n == 1 ? g + " has no edge sharper than " + angle + "°" : g + " split into " + n;
+      } catch (IllegalArgumentException e) {
+        note = e.getMessage();
+      }
+    }
+    nk_layout_row_dynamic(ctx, 22, 2);
+    nk_label(ctx, "rename to", NK_TEXT_LEFT);
+    w.field("rename " + g, g)
+        .ifPresent(
+            t -> {
+              try {
+                edits.rename(g, t);
+                session.get().selection().click(t.strip());
+                note = "";
+              } catch (IllegalArgumentException e) {
+                note = e.getMessage();
+              }
+            });
+    if (!note.isEmpty()) {
+      nk_layout_row_dynamic(ctx, 34, 1);
+      nk_label_wrap(ctx, note);
+    }
+  }
+
+  private String note = "";
 
   static Optional<FaceKind> kindWord(String word) {
     for (FaceKind k : FaceKind.values()) {

@@ -182,13 +182,54 @@ class CaseDraftTest {
     undoable(d, x -> probes.add(0.005, 0.005, 0.004));
     undoable(d, x -> probes.rename("probe-1", "centre"));
     undoable(d, x -> probes.remove("centre"));
-    undoable(
-        d,
-        x ->
-            x.editMesh(
-                "rename zmax",
-                m -> m,
-                tree -> TreePath.of("faces", "top").set(tree, CaseValues.node("1"))));
+    undoable(d, x -> new GroupEdits(x).rename("zmax", "lid"));
+  }
+
+  @Test
+  void aCurvedSideSplitsIntoPatchesThatKeepItsKindAndSaveWithTheirOwnMesh() throws IOException {
+    Path mesh = dir.resolve("can.msh");
+    // 8 cells around: neighbouring side facets meet at 45°, more than a 30° feature angle
+    MshWriter.write(mesh, StructuredMesher.cylinder(0.005, 0.004, 1, 8, 1, 1), false);
+    CaseDraft d =
+        CaseDraft.ofMesh(
+            mesh,
+            dev.soakfield.mesh.load.MeshLoader.load(
+                    mesh, dev.soakfield.mesh.topo.AssemblyOptions.defaults())
+                .mesh());
+    new FaceEdits(d).kind(List.of("side"), FaceKind.FLUX);
+    new MaterialEdits(d)
+        .fromLibrary(
+            "body", "m", CaseText.parse("{\"diffusivity\": 1e-12, \"solubility\": 1}", mesh, "m"));
+    String before = d.text();
+    var meshBefore = d.mesh();
+    assertEquals(8, new GroupEdits(d).split("side", 30));
+    assertEquals(-1, d.mesh().faceGroupIndex("side"));
+    for (int i = 1; i <= 8; i++) {
+      assertEquals("flux", new FaceEdits(d).kindOf("side-" + i));
+    }
+    assertTrue(d.undo());
+    assertEquals(before, d.text());
+    assertTrue(d.mesh() == meshBefore);
+    assertTrue(d.redo());
+    new GroupEdits(d).rename("side-1", "window");
+    d.saveAs(dir.resolve("can.case.json"));
+    // the case names the regrouped mesh written beside it; the mesher's file is untouched
+    CaseSpec spec = CaseReader.read(dir.resolve("can.case.json"));
+    assertEquals(dir.resolve("can-regrouped.msh"), spec.mesh());
+    var saved =
+        dev.soakfield.mesh.load.MeshLoader.load(
+                spec.mesh(), dev.soakfield.mesh.topo.AssemblyOptions.defaults())
+            .mesh();
+    assertTrue(saved.faceGroupIndex("window") >= 0);
+    assertEquals(FaceKind.FLUX, spec.faces().get("window").kind());
+    assertTrue(
+        dev.soakfield.mesh.load.MeshLoader.load(
+                    mesh, dev.soakfield.mesh.topo.AssemblyOptions.defaults())
+                .mesh()
+                .faceGroupIndex("side")
+            >= 0);
+    // a flat group has no edge to split at: nothing changes
+    assertEquals(1, new GroupEdits(d).split("top", 30));
   }
 
   @Test
