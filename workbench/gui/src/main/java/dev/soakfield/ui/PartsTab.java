@@ -8,11 +8,15 @@ import dev.soakfield.app.setup.CaseText;
 import dev.soakfield.app.setup.CaseValues;
 import dev.soakfield.app.setup.DraftCheck;
 import dev.soakfield.app.setup.MaterialEdits;
+import dev.soakfield.app.setup.MaterialLibrary;
 import dev.soakfield.app.setup.SetupSession;
 import dev.soakfield.app.setup.TreePath;
 import dev.soakfield.fem.laws.LawEntry;
 import dev.soakfield.law.api.LawParameter;
 import dev.soakfield.mesh.VolumeGroup;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.function.Supplier;
@@ -71,6 +75,61 @@ final class PartsTab {
         .ifPresent(t -> m.value(part, TreePath.of("density"), t));
     source(m, part, e.path("source"));
     check.ifPresent(c -> w.problems(c.about(MaterialEdits.path(part))));
+    library(d, m, part, e);
+  }
+
+  /** Import from the shipped examples or the user's library; keep this part's material there. */
+  private void library(CaseDraft d, MaterialEdits m, String part, JsonNode entry) {
+    var ctx = w.ctx();
+    nk_layout_row_dynamic(ctx, 20, 1);
+    nk_label(ctx, "Material library (" + MaterialLibrary.ofUser() + ")", NK_TEXT_LEFT);
+    for (MaterialLibrary.Entry le : libraryEntries()) {
+      nk_layout_row_dynamic(ctx, 22, 1);
+      if (w.button("library " + le.name(), "use: " + le.name())) {
+        m.fromLibrary(part, le.name(), le.material());
+        libraryNote = le.name() + ": " + le.note() + " (" + le.source() + ")";
+      }
+    }
+    nk_layout_row_dynamic(ctx, 22, 1);
+    if (entry.isObject() && w.button("keep " + part + " in my library")) {
+      try {
+        MaterialLibrary.keep(
+            MaterialLibrary.ofUser(),
+            new MaterialLibrary.Entry(
+                part + " (" + d.caseFile().getFileName() + ")",
+                "kept from " + d.caseFile(),
+                "",
+                (com.fasterxml.jackson.databind.node.ObjectNode) entry));
+        libraryNote = "kept in " + MaterialLibrary.ofUser();
+        libraryReadAt = 0;
+      } catch (IOException | RuntimeException ex) {
+        libraryNote = "could not keep it: " + ex.getMessage();
+      }
+    }
+    if (!libraryNote.isEmpty()) {
+      nk_layout_row_dynamic(ctx, 48, 1);
+      nk_label_wrap(ctx, libraryNote);
+    }
+  }
+
+  private String libraryNote = "";
+  private List<MaterialLibrary.Entry> library = List.of();
+  private long libraryReadAt;
+
+  /** The examples and the user's entries, read again at most every two seconds. */
+  private List<MaterialLibrary.Entry> libraryEntries() {
+    long now = System.nanoTime();
+    if (libraryReadAt == 0 || now - libraryReadAt > 2_000_000_000L) {
+      List<MaterialLibrary.Entry> all = new ArrayList<>(MaterialLibrary.examples());
+      try {
+        all.addAll(MaterialLibrary.read(MaterialLibrary.ofUser()));
+      } catch (IOException | RuntimeException ex) {
+        libraryNote = "your library cannot be read: " + ex.getMessage();
+      }
+      library = all;
+      libraryReadAt = now;
+    }
+    return library;
   }
 
   private void coefficient(MaterialEdits m, String part, String key, String what, boolean axes) {

@@ -114,12 +114,15 @@ final class ShowPanel {
   }
 
   private void faceGroups(MemoryStack stack, Study study) {
-    nk_label(ctx, "Face groups", NK_TEXT_LEFT);
+    int[] byKind = model.settings().groupColours();
+    nk_label(
+        ctx, byKind.length > 0 ? "Face groups, by kind (see Faces)" : "Face groups", NK_TEXT_LEFT);
     List<String> groups = study.geometry().faceGroupNames();
     for (int g = 0; g < groups.size(); g++) {
       nk_layout_row_begin(ctx, NK_STATIC, 18, 2);
       nk_layout_row_push(ctx, 18);
-      nk_button_color(ctx, NkCharts.colour(stack, g));
+      nk_button_color(
+          ctx, g < byKind.length ? AxesPlot.colour(stack, byKind[g]) : NkCharts.colour(stack, g));
       nk_layout_row_push(ctx, ViewLayout.LEFT - 60);
       nk_label(ctx, groups.get(g), NK_TEXT_LEFT);
       nk_layout_row_end(ctx);
