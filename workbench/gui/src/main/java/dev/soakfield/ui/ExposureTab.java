@@ -10,11 +10,10 @@ import dev.soakfield.app.setup.DraftCheck;
 import dev.soakfield.app.setup.ExposureEdits;
 import dev.soakfield.app.setup.SetupSession;
 import dev.soakfield.app.setup.TreePath;
-import dev.soakfield.fem.physics.ExposureHistory;
+import dev.soakfield.report.TimeAxis;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.Supplier;
-import org.lwjgl.system.MemoryStack;
 
 /**
  * The "Exposure" tab: the sorption law and the history's segments (duration, temperature, humidity
@@ -92,7 +91,7 @@ final class ExposureTab {
     }
     Optional<DraftCheck> check = s.check();
     check.ifPresent(c -> w.problems(c.about(TreePath.of("exposure"))));
-    check.flatMap(DraftCheck::spec).flatMap(spec -> spec.exposure()).ifPresent(this::plot);
+    check.flatMap(c -> c.temperatureCurve(60)).ifPresent(this::plot);
   }
 
   private void segment(
@@ -109,30 +108,26 @@ final class ExposureTab {
     }
   }
 
-  private void plot(ExposureHistory h) {
+  /** Temperatures in °C at even times, then the end time in s (see DraftCheck). */
+  private void plot(double[] curve) {
     var ctx = w.ctx();
-    double end = h.end();
-    double[] t = new double[60];
-    double lo = Double.POSITIVE_INFINITY;
-    double hi = Double.NEGATIVE_INFINITY;
-    for (int i = 0; i < t.length; i++) {
-      t[i] = h.temperature(end * i / (t.length - 1.0)) - 273.15;
-      lo = Math.min(lo, t[i]);
-      hi = Math.max(hi, t[i]);
+    int n = curve.length - 1;
+    double end = curve[n];
+    TimeAxis axis = TimeAxis.forEnd(end);
+    double[] x = new double[n];
+    double[] t = java.util.Arrays.copyOf(curve, n);
+    for (int i = 0; i < n; i++) {
+      x[i] = end * i / (n - 1.0) / axis.seconds();
     }
     nk_layout_row_dynamic(ctx, 18, 1);
-    nk_label(
+    nk_label(ctx, "Exposure history over " + Annotations.time(end), NK_TEXT_LEFT);
+    AxesPlot.draw(
         ctx,
-        "temperature, °C: "
-            + Annotations.number(lo)
-            + " .. "
-            + Annotations.number(hi)
-            + " over "
-            + Annotations.time(end),
-        NK_TEXT_LEFT);
-    nk_layout_row_dynamic(ctx, 90, 1);
-    try (MemoryStack stack = MemoryStack.stackPush()) {
-      NkCharts.lines(ctx, stack, List.of(t), Math.min(0, lo), hi > lo ? hi : lo + 1);
-    }
+        150,
+        x,
+        List.of(t),
+        new int[] {0xe07a4a},
+        "time [" + axis.unit() + "]",
+        "temperature [°C]");
   }
 }

@@ -11,9 +11,9 @@ import dev.soakfield.app.setup.FaceSelection;
 import dev.soakfield.app.setup.GroupEdits;
 import dev.soakfield.app.setup.KindColours;
 import dev.soakfield.app.setup.SetupSession;
-import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.mesh.FaceGroup;
 import dev.soakfield.mesh.FaceGroupKind;
+import dev.soakfield.report.TimeAxis;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.Supplier;
@@ -57,7 +57,7 @@ final class FacesTab {
         sel.set(g.name(), on);
       }
       if (!kind.isEmpty()) {
-        w.label(kind, KindColours.of(kindWord(kind).orElse(FaceKind.SEALED)));
+        w.label(kind, KindColours.ofWord(kind));
       } else if (iface) {
         nk_label(ctx, "interface (joins its parts)", NK_TEXT_LEFT);
       } else {
@@ -86,8 +86,8 @@ final class FacesTab {
       return;
     }
     nk_layout_row_dynamic(ctx, 22, 3);
-    for (FaceKind k : FaceEdits.kinds()) {
-      if (w.button(k.word())) {
+    for (String k : FaceEdits.kindWords()) {
+      if (w.button(k)) {
         faces.kind(chosen, k);
       }
     }
@@ -168,18 +168,22 @@ final class FacesTab {
               var table = key.equals("value") ? f.value() : f.coefficient();
               double[] b = table.breakpoints();
               if (b.length >= 2) {
-                double[] y = new double[40];
-                double lo = Double.POSITIVE_INFINITY;
-                double hi = Double.NEGATIVE_INFINITY;
+                TimeAxis axis = TimeAxis.forEnd(b[b.length - 1]);
+                double[] x = new double[40];
+                double[] y = new double[x.length];
                 for (int i = 0; i < y.length; i++) {
-                  y[i] = table.at(b[0] + (b[b.length - 1] - b[0]) * i / (y.length - 1.0));
-                  lo = Math.min(lo, y[i]);
-                  hi = Math.max(hi, y[i]);
+                  double t = b[0] + (b[b.length - 1] - b[0]) * i / (y.length - 1.0);
+                  x[i] = t / axis.seconds();
+                  y[i] = table.at(t);
                 }
-                nk_layout_row_dynamic(ctx, 80, 1);
-                try (var stack = org.lwjgl.system.MemoryStack.stackPush()) {
-                  NkCharts.lines(ctx, stack, List.of(y), Math.min(0, lo), hi > lo ? hi : lo + 1);
-                }
+                AxesPlot.draw(
+                    ctx,
+                    110,
+                    x,
+                    List.of(y),
+                    new int[] {0x6fa8dc},
+                    "time [" + axis.unit() + "]",
+                    key);
               }
             });
   }
@@ -224,13 +228,4 @@ final class FacesTab {
   }
 
   private String note = "";
-
-  static Optional<FaceKind> kindWord(String word) {
-    for (FaceKind k : FaceKind.values()) {
-      if (k.word().equals(word)) {
-        return Optional.of(k);
-      }
-    }
-    return Optional.empty();
-  }
 }

@@ -153,6 +153,12 @@ class SetupSessionScriptTest {
       type(wb, "time.outputs", "30 min, 1 h, 2 h");
       shot(wb, "time-tab");
       press(wb, "tab Exposure");
+      press(wb, "add segment");
+      press(wb, "add segment");
+      type(wb, "exposure[1] temperature", "20 degC -> 60 degC");
+      assertEquals(
+          "[\"20 degC\",\"60 degC\"]",
+          session.draft().get().tree().path("exposure").path(1).path("temperature").toString());
       shot(wb, "exposure-tab");
       press(wb, "tab Probes");
       double[] centre = wb.camera().toPixel(0.005, 0.005, 0.004);

@@ -52,6 +52,23 @@ public record DraftCheck(
     }
   }
 
+  /**
+   * The exposure's temperature in °C at {@code count} even times from 0 to its end, then the end
+   * time in s as the last element; empty when the case has no exposure or does not read yet.
+   */
+  public Optional<double[]> temperatureCurve(int count) {
+    return spec.flatMap(CaseSpec::exposure)
+        .map(
+            h -> {
+              double[] out = new double[count + 1];
+              for (int i = 0; i < count; i++) {
+                out[i] = h.temperature(h.end() * i / (count - 1.0)) - 273.15;
+              }
+              out[count] = h.end();
+              return out;
+            });
+  }
+
   /** The problems about {@code path} or inside it. */
   public List<String> about(TreePath path) {
     List<String> out = new ArrayList<>();

@@ -167,4 +167,21 @@ public final class FaceEdits {
         FaceKind.AMBIENT,
         FaceKind.SEALED);
   }
+
+  /** The case file's words for {@link #kinds()}, for the window's buttons. */
+  public static List<String> kindWords() {
+    return kinds().stream().map(FaceKind::word).toList();
+  }
+
+  /** Gives the groups the kind the case file calls {@code word}. */
+  public void kind(Collection<String> groups, String word) {
+    for (FaceKind k : FaceKind.values()) {
+      if (k.word().equals(word)) {
+        kind(groups, k);
+        return;
+      }
+    }
+    throw new IllegalArgumentException(
+        "found the kind '" + word + "', expected one of " + kindWords());
+  }
 }

@@ -54,6 +54,13 @@ public final class KindColours {
     return out;
   }
 
+  /**
+   * The colour of the kind the case file calls {@code word} (unknown words: the no-entry yellow).
+   */
+  public static int ofWord(String word) {
+    return kindOf(word);
+  }
+
   private static int kindOf(String word) {
     for (FaceKind k : FaceKind.values()) {
       if (k.word().equals(word)) {
