@@ -64,6 +64,9 @@ final class MaterialBinder {
     if (obj.isEmpty()) {
       return Optional.empty();
     }
+    if (obj.get().members().containsKey("impermeable")) {
+      return impermeable(group, obj.get(), path);
+    }
     fields.onlyKeys(obj.get(), path, MATERIAL_KEYS);
     String dPath = CasePaths.child(path, "diffusivity");
     double[] dEnergy = {0};
@@ -121,6 +124,19 @@ final class MaterialBinder {
     }
     energy[0] = dh.getAsDouble();
     return s0;
+  }
+
+  /** {@code {"impermeable": true}}: the part is taken out of the run; nothing else goes with it. */
+  private Optional<MaterialSpec> impermeable(String group, CaseNode.Obj obj, String path) {
+    fields.onlyKeys(obj, path, Set.of("impermeable"));
+    CaseNode v = obj.members().get("impermeable").value();
+    if (!(v instanceof CaseNode.Bool b) || !b.value() || obj.members().size() != 1) {
+      if (obj.members().size() == 1) {
+        fields.problems().found(v, CasePaths.child(path, "impermeable"), "true, alone");
+      }
+      return Optional.empty();
+    }
+    return Optional.of(MaterialSpec.impermeable(group));
   }
 
   /** One source object or an array of them: built-in kinds and catalog laws. */

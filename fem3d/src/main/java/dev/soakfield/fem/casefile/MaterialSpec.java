@@ -17,6 +17,9 @@ import java.util.OptionalDouble;
  * @param solubilityEnergy heat of solution ΔH of S, J/mol
  * @param density mass density in kg/m³, when given (for mass fractions and weight gain)
  * @param laws source laws from the catalog, summed
+ * @param impermeable the part takes no part in the run: its tetrahedra are taken out of the mesh
+ *     before the model is built, so faces it shared with other parts are sealed (the other values
+ *     are then unused)
  */
 public record MaterialSpec(
     String volumeGroup,
@@ -26,7 +29,8 @@ public record MaterialSpec(
     double diffusivityEnergy,
     double solubilityEnergy,
     OptionalDouble density,
-    List<SourceSpec.LawSource> laws) {
+    List<SourceSpec.LawSource> laws,
+    boolean impermeable) {
   public MaterialSpec {
     Objects.requireNonNull(volumeGroup, "volumeGroup");
     Objects.requireNonNull(diffusivity, "diffusivity");
@@ -36,6 +40,44 @@ public record MaterialSpec(
     if (!(solubility > 0) || !Double.isFinite(solubility)) {
       throw new IllegalArgumentException("solubility must be positive, got " + solubility);
     }
+  }
+
+  /** A material that takes part in the run. */
+  public MaterialSpec(
+      String volumeGroup,
+      Diffusivity diffusivity,
+      double solubility,
+      SourceSpec source,
+      double diffusivityEnergy,
+      double solubilityEnergy,
+      OptionalDouble density,
+      List<SourceSpec.LawSource> laws) {
+    this(
+        volumeGroup,
+        diffusivity,
+        solubility,
+        source,
+        diffusivityEnergy,
+        solubilityEnergy,
+        density,
+        laws,
+        false);
+  }
+
+  /**
+   * A part marked impermeable: no tetrahedron of it reaches the model (see {@code impermeable}).
+   */
+  public static MaterialSpec impermeable(String volumeGroup) {
+    return new MaterialSpec(
+        volumeGroup,
+        Diffusivity.isotropic(1),
+        1,
+        new SourceSpec.NoSource(),
+        0,
+        0,
+        OptionalDouble.empty(),
+        List.of(),
+        true);
   }
 
   /** A material with constant coefficients and no source law. */

@@ -7,6 +7,7 @@ import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.casefile.StepControl;
 import dev.soakfield.fem.casefile.TimeScheme;
 import dev.soakfield.fem.model.DiffusionModel;
+import dev.soakfield.fem.model.ImpermeableParts;
 import dev.soakfield.fem.model.LawResolver;
 import dev.soakfield.fem.model.ModelBuilder;
 import dev.soakfield.fem.results.ResultFiles;
@@ -76,7 +77,7 @@ public final class RunPipeline {
         warnings.add("mesh: " + f.message());
       }
     }
-    TetMesh mesh = imported.mesh();
+    TetMesh mesh = ImpermeableParts.removedFrom(spec, imported.mesh());
     warnings.addAll(CaseChecks.againstMesh(spec, mesh));
     int order = spec.elements().orderFor(mesh.order());
     if (order == 2 && mesh.order() == 1) {

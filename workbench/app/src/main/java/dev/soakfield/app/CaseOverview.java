@@ -49,6 +49,14 @@ public final class CaseOverview {
             mesh.nodesPerTet()));
     sb.append("materials:\n");
     for (MaterialSpec m : c.materials().values()) {
+      if (m.impermeable()) {
+        sb.append(
+            String.format(
+                Locale.ROOT,
+                "  %-16s impermeable: taken out of the run, its faces with other parts sealed%n",
+                m.volumeGroup()));
+        continue;
+      }
       sb.append(
           String.format(
               Locale.ROOT,

@@ -69,6 +69,26 @@ final class PartsTab {
       }
       return;
     }
+    if (m.isImpermeable(part)) {
+      nk_layout_row_dynamic(ctx, 34, 1);
+      nk_label_wrap(
+          ctx,
+          part + " is impermeable: taken out of the run; its faces with other parts are sealed");
+      nk_layout_row_dynamic(ctx, 22, 1);
+      if (w.button("give " + part + " a material")) {
+        m.fromLibrary(
+            part,
+            "starting values",
+            CaseText.parse(
+                "{\"diffusivity\": 1e-12, \"solubility\": 1}", d.caseFile(), "material"));
+      }
+      return;
+    }
+    nk_layout_row_dynamic(ctx, 22, 1);
+    if (w.button("mark " + part + " impermeable")) {
+      m.impermeable(part);
+      return;
+    }
     coefficient(m, part, "diffusivity", "D, m²/s", true);
     coefficient(m, part, "solubility", "S (c = S·potential)", false);
     w.labelled("density", "density", CaseValues.text(e.path("density")), 0.35f)

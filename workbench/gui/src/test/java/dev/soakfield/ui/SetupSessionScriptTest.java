@@ -260,6 +260,110 @@ class SetupSessionScriptTest {
   }
 
   @Test
+  void aHandWrittenCaseOpensShowsItsValuesAndAsksBeforeItsCommentsGo() throws Exception {
+    GlAvailable.orSkip();
+    MshWriter.write(
+        dir.resolve("pod.msh"), StructuredMesher.box(0.01, 0.01, 0.004, 2, 2, 1, 1), false);
+    Path hand =
+        Files.writeString(
+            dir.resolve("hand.json"),
+            """
+            // written by hand
+            { "mesh": "pod.msh",
+              "materials": { "body": { "diffusivity": { "D0": 4e-6, "Q": "40 kJ/mol" } } },
+              "faces": { "zmax": { "kind": "exchange", "coefficient": 1e-7,
+                                   "value": [[0, 0], [3600, 1]] } },
+              "time": { "end": "1 h" } }
+            """);
+    SetupSession session = SetupSession.open(hand, SourceLawCatalog.classPathOnly());
+    GlSurface surface = GlSurface.offscreen(1400, 860);
+    Path saveAs = dir.resolve("copy.case.json");
+    FileDialogs answers =
+        new FileDialogs() {
+          @Override
+          public Optional<Path> open() {
+            return Optional.of(dir.resolve("pod.msh"));
+          }
+
+          @Override
+          public Optional<Path> saveAs(Path suggested) {
+            return Optional.of(saveAs);
+          }
+        };
+    try (Workbench wb = new Workbench(surface, session)) {
+      wb.actions().use(answers, new RecentFiles(dir.resolve("recent.txt")));
+      wb.frame();
+      // the exchange face's table shows in its rows; its kind colours the top in the list
+      click(wb, Workbench.viewLeft() + 5, 5, false);
+      press(wb, "group zmax");
+      assertTrue(wb.widget("value t1").isPresent());
+      assertTrue(wb.widget("coefficient").isPresent());
+      shot(wb, "faces-tab-time-table");
+      press(wb, "value add row");
+      assertEquals(3, session.draft().get().tree().path("faces").path("zmax").path("value").size());
+      // Ctrl+Z takes the row back, Ctrl+Y makes it again, Ctrl+Shift+Z too after another undo
+      wb.key(GLFW.GLFW_KEY_Z, GLFW.GLFW_MOD_CONTROL);
+      assertEquals(2, session.draft().get().tree().path("faces").path("zmax").path("value").size());
+      wb.key(GLFW.GLFW_KEY_Y, GLFW.GLFW_MOD_CONTROL);
+      assertEquals(3, session.draft().get().tree().path("faces").path("zmax").path("value").size());
+      wb.key(GLFW.GLFW_KEY_Z, GLFW.GLFW_MOD_CONTROL);
+      wb.key(GLFW.GLFW_KEY_Z, GLFW.GLFW_MOD_CONTROL | GLFW.GLFW_MOD_SHIFT);
+      assertEquals(3, session.draft().get().tree().path("faces").path("zmax").path("value").size());
+      // the Arrhenius diffusivity shows its pre-factor and energy
+      press(wb, "tab Parts");
+      assertTrue(wb.widget("diffusivityD0").isPresent());
+      press(wb, "mark body impermeable");
+      assertTrue(
+          session
+              .draft()
+              .get()
+              .tree()
+              .path("materials")
+              .path("body")
+              .path("impermeable")
+              .asBoolean());
+      shot(wb, "parts-tab-impermeable");
+      wb.key(GLFW.GLFW_KEY_Z, GLFW.GLFW_MOD_CONTROL);
+      // Ctrl+S on a file with comments asks first; No leaves the file as it was
+      String before = Files.readString(hand);
+      wb.key(GLFW.GLFW_KEY_S, GLFW.GLFW_MOD_CONTROL);
+      wb.frame();
+      shot(wb, "save-asks-about-comments");
+      press(wb, "confirm no");
+      assertEquals(before, Files.readString(hand));
+      wb.key(GLFW.GLFW_KEY_S, GLFW.GLFW_MOD_CONTROL);
+      wb.frame();
+      press(wb, "confirm yes");
+      assertTrue(!Files.readString(hand).contains("//"));
+      // the saved case means what the hand-written one meant
+      Path original = Files.writeString(dir.resolve("original.json"), before);
+      assertEquals(CaseReader.read(original).faces(), CaseReader.read(hand).faces());
+      assertEquals(CaseReader.read(original).materials(), CaseReader.read(hand).materials());
+      assertEquals(CaseReader.read(original).time(), CaseReader.read(hand).time());
+      // Ctrl+Shift+S saves a copy where the dialog says; Ctrl+O opens what it says
+      wb.key(GLFW.GLFW_KEY_S, GLFW.GLFW_MOD_CONTROL | GLFW.GLFW_MOD_SHIFT);
+      assertTrue(Files.isRegularFile(saveAs));
+      wb.key(GLFW.GLFW_KEY_O, GLFW.GLFW_MOD_CONTROL);
+      wb.frame();
+      assertEquals(dir.resolve("pod.case.json"), wb.session().draft().get().caseFile());
+      // F1 shows the keys, Esc hides them; F fits the view
+      assertTrue(wb.key(GLFW.GLFW_KEY_F1, 0));
+      assertTrue(wb.helpShown());
+      assertTrue(wb.key(GLFW.GLFW_KEY_ESCAPE, 0));
+      assertFalse(wb.helpShown());
+      assertTrue(wb.key(GLFW.GLFW_KEY_F, 0));
+      // the recent list has what was opened and saved, newest first
+      press(wb, "Recent");
+      shot(wb, "recent-files");
+      assertEquals(
+          dir.resolve("pod.msh").toAbsolutePath(),
+          new RecentFiles(dir.resolve("recent.txt")).list().get(0));
+    } finally {
+      surface.close();
+    }
+  }
+
+  @Test
   void theKeysTableNamesEveryShortcutOfTheContract() {
     String all = java.util.Arrays.deepToString(HelpOverlay.KEYS);
     for (String k :

@@ -4,6 +4,7 @@ import dev.soakfield.fem.casefile.CaseChecks;
 import dev.soakfield.fem.casefile.CaseInputException;
 import dev.soakfield.fem.casefile.CaseReader;
 import dev.soakfield.fem.casefile.CaseSpec;
+import dev.soakfield.fem.model.ImpermeableParts;
 import dev.soakfield.fem.model.LawResolver;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.mesh.MeshInputException;
@@ -33,13 +34,13 @@ public record DraftCheck(
     List<String> warnings = new ArrayList<>();
     try {
       CaseSpec spec = CaseReader.readText(draft.text(), draft.caseFile(), name);
-      warnings.addAll(CaseChecks.againstMesh(spec, draft.mesh()));
+      var mesh = ImpermeableParts.removedFrom(spec, draft.mesh());
+      warnings.addAll(CaseChecks.againstMesh(spec, mesh));
       boolean binds =
           spec.initial().from().isPresent()
               || spec.materials().values().stream().anyMatch(m -> !m.laws().isEmpty());
       if (binds) { // building the model is the only full check of laws and restart folders
-        warnings.addAll(
-            RunPipeline.bindAll(new RunPipeline.Prepared(spec, draft.mesh(), warnings), laws));
+        warnings.addAll(RunPipeline.bindAll(new RunPipeline.Prepared(spec, mesh, warnings), laws));
       }
       return new DraftCheck(List.of(), warnings, Optional.of(spec));
     } catch (CaseInputException e) {

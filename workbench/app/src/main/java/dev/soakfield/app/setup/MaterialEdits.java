@@ -126,6 +126,17 @@ public final class MaterialEdits {
         });
   }
 
+  /** Marks the part impermeable: it is taken out of the run (see the case file's key). */
+  public void impermeable(String part) {
+    draft.edit(
+        part + " impermeable",
+        tree -> path(part).set(tree, F.objectNode().put("impermeable", true)));
+  }
+
+  public boolean isImpermeable(String part) {
+    return entry(part).path("impermeable").asBoolean(false);
+  }
+
   /** Takes the part's source away. */
   public void noSource(String part) {
     draft.edit("no source in " + part, tree -> path(part).child("source").set(tree, null));
