@@ -38,8 +38,9 @@ public final class CaseDraft {
   }
 
   /**
-   * A new case for a bare mesh, to be saved beside it as {@code <mesh name>.case.json}: every
-   * volume group still needs a material, every face group is sealed until given a kind.
+   * A new case for a bare mesh, to be saved beside it as {@code <mesh name>.case.json} (or {@code
+   * <mesh name>-2.case.json} and so on when that file exists): every volume group still needs a
+   * material, every face group is sealed until given a kind.
    */
   public static CaseDraft ofMesh(Path meshFile, TetMesh mesh) {
     JsonNodeFactory f = JsonNodeFactory.instance;
@@ -54,6 +55,9 @@ public final class CaseDraft {
     time.put("capacity", "lumped"); // keeps values within their bounds from the first step
     String stem = stem(meshFile.getFileName().toString(), ".msh");
     Path caseFile = meshFile.toAbsolutePath().resolveSibling(stem + ".case.json");
+    for (int n = 2; Files.exists(caseFile); n++) { // never over a case already there
+      caseFile = meshFile.toAbsolutePath().resolveSibling(stem + "-" + n + ".case.json");
+    }
     return new CaseDraft(caseFile, new State(tree, mesh, false), false);
   }
 

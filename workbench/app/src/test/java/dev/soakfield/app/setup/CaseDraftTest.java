@@ -90,6 +90,12 @@ class CaseDraftTest {
     CaseDraft d = s.draft().orElseThrow();
     assertEquals(dir.resolve("box.case.json"), d.caseFile());
     assertEquals(dir.resolve("box-results"), d.resultFolder());
+    // a case already beside the mesh is never written over: the new one takes a free name
+    Files.writeString(dir.resolve("box.case.json"), "{}");
+    assertEquals(
+        dir.resolve("box-2.case.json"),
+        SetupSession.open(mesh, SourceLawCatalog.classPathOnly()).draft().orElseThrow().caseFile());
+    Files.delete(dir.resolve("box.case.json"));
     DraftCheck c = s.check().orElseThrow();
     assertTrue(c.blocksRun().orElseThrow().contains("materials: "), c.blocksRun().toString());
     assertEquals(1, c.about(TreePath.of("materials")).size());
