@@ -19,26 +19,18 @@ import java.util.function.Supplier;
  * The "Exposure" tab: the sorption law and the history's segments (duration, temperature, humidity
  * or pressure; "a -> b" makes a ramp) and repeat blocks, with a plot of the temperature.
  */
-final class ExposureTab {
-  private final Widgets w;
-  private final Supplier<SetupSession> session;
+final class ExposureTab extends SetupTab {
   private String repeatCount = "2";
   private String repeatTimes = "3";
 
   ExposureTab(Widgets w, Supplier<SetupSession> session) {
-    this.w = w;
-    this.session = session;
+    super(w, session);
   }
 
-  void draw() {
+  @Override
+  void draw(SetupSession s, CaseDraft d) {
     var ctx = w.ctx();
-    SetupSession s = session.get();
     nk_layout_row_dynamic(ctx, 20, 1);
-    if (s.draft().isEmpty()) {
-      nk_label(ctx, "no case open", NK_TEXT_LEFT);
-      return;
-    }
-    CaseDraft d = s.draft().get();
     ExposureEdits env = new ExposureEdits(d);
     nk_label(ctx, "Law: how the potential relates to the environment", NK_TEXT_LEFT);
     nk_layout_row_dynamic(ctx, 20, 3);

@@ -23,25 +23,17 @@ import java.util.function.Supplier;
  * default), a selection shared with the view, the kind buttons and the selection's values as a
  * constant or a time table.
  */
-final class FacesTab {
-  private final Widgets w;
-  private final Supplier<SetupSession> session;
+final class FacesTab extends SetupTab {
   private String angle = "30";
 
   FacesTab(Widgets w, Supplier<SetupSession> session) {
-    this.w = w;
-    this.session = session;
+    super(w, session);
   }
 
-  void draw() {
+  @Override
+  void draw(SetupSession s, CaseDraft d) {
     var ctx = w.ctx();
-    SetupSession s = session.get();
     nk_layout_row_dynamic(ctx, 20, 1);
-    if (s.draft().isEmpty()) {
-      nk_label(ctx, "no case open: open a mesh or a case to set up its faces", NK_TEXT_LEFT);
-      return;
-    }
-    CaseDraft d = s.draft().get();
     FaceEdits faces = new FaceEdits(d);
     FaceSelection sel = s.selection();
     List<FaceGroup> groups = d.mesh().faceGroups();

@@ -4,7 +4,6 @@ import static org.lwjgl.nuklear.Nuklear.*;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import dev.soakfield.app.setup.CaseDraft;
-import dev.soakfield.app.setup.CaseText;
 import dev.soakfield.app.setup.CaseValues;
 import dev.soakfield.app.setup.DraftCheck;
 import dev.soakfield.app.setup.MaterialEdits;
@@ -26,25 +25,16 @@ import java.util.function.Supplier;
  * with axes), solubility, density and a source law from the catalog with its parameters' units,
  * defaults and ranges.
  */
-final class PartsTab {
-  private final Widgets w;
-  private final Supplier<SetupSession> session;
+final class PartsTab extends SetupTab {
 
   PartsTab(Widgets w, Supplier<SetupSession> session) {
-    this.w = w;
-    this.session = session;
+    super(w, session);
   }
 
-  void draw() {
+  @Override
+  void draw(SetupSession s, CaseDraft d) {
     var ctx = w.ctx();
-    SetupSession s = session.get();
     nk_layout_row_dynamic(ctx, 20, 1);
-    if (s.draft().isEmpty()) {
-      nk_label(
-          ctx, "no case open: open a mesh or a case to give its parts materials", NK_TEXT_LEFT);
-      return;
-    }
-    CaseDraft d = s.draft().get();
     MaterialEdits m = new MaterialEdits(d);
     nk_label(ctx, "Parts (volume groups)", NK_TEXT_LEFT);
     for (VolumeGroup g : d.mesh().volumeGroups()) {
@@ -61,11 +51,7 @@ final class PartsTab {
     nk_layout_row_dynamic(ctx, 22, 1);
     if (e.isMissingNode()) {
       if (w.button("give " + part + " a material")) {
-        m.fromLibrary(
-            part,
-            "starting values",
-            CaseText.parse(
-                "{\"diffusivity\": 1e-12, \"solubility\": 1}", d.caseFile(), "material"));
+        m.startingMaterial(part);
       }
       return;
     }
@@ -76,11 +62,7 @@ final class PartsTab {
           part + " is impermeable: taken out of the run; its faces with other parts are sealed");
       nk_layout_row_dynamic(ctx, 22, 1);
       if (w.button("give " + part + " a material")) {
-        m.fromLibrary(
-            part,
-            "starting values",
-            CaseText.parse(
-                "{\"diffusivity\": 1e-12, \"solubility\": 1}", d.caseFile(), "material"));
+        m.startingMaterial(part);
       }
       return;
     }

@@ -10,24 +10,16 @@ import dev.soakfield.app.setup.TreePath;
 import java.util.function.Supplier;
 
 /** The "Probes" tab: named points, placed by clicking on the part (or the cut) or typed in. */
-final class ProbesTab {
-  private final Widgets w;
-  private final Supplier<SetupSession> session;
+final class ProbesTab extends SetupTab {
 
   ProbesTab(Widgets w, Supplier<SetupSession> session) {
-    this.w = w;
-    this.session = session;
+    super(w, session);
   }
 
-  void draw() {
+  @Override
+  void draw(SetupSession s, CaseDraft d) {
     var ctx = w.ctx();
-    SetupSession s = session.get();
     nk_layout_row_dynamic(ctx, 34, 1);
-    if (s.draft().isEmpty()) {
-      nk_label(ctx, "no case open", NK_TEXT_LEFT);
-      return;
-    }
-    CaseDraft d = s.draft().get();
     ProbeEdits probes = new ProbeEdits(d);
     nk_label_wrap(
         ctx,

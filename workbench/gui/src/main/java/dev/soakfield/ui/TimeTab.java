@@ -13,25 +13,17 @@ import java.util.function.Supplier;
  * The "Time" tab: end, output times, step control (adaptive with a tolerance, or fixed steps),
  * capacity form, the initial concentration and the threshold whose arrival is reported.
  */
-final class TimeTab {
+final class TimeTab extends SetupTab {
   private static final float LABEL = 0.4f;
-  private final Widgets w;
-  private final Supplier<SetupSession> session;
 
   TimeTab(Widgets w, Supplier<SetupSession> session) {
-    this.w = w;
-    this.session = session;
+    super(w, session);
   }
 
-  void draw() {
+  @Override
+  void draw(SetupSession s, CaseDraft d) {
     var ctx = w.ctx();
-    SetupSession s = session.get();
     nk_layout_row_dynamic(ctx, 20, 1);
-    if (s.draft().isEmpty()) {
-      nk_label(ctx, "no case open", NK_TEXT_LEFT);
-      return;
-    }
-    CaseDraft d = s.draft().get();
     JsonNode time = d.tree().path("time");
     nk_label(ctx, "Times take a unit: 3600, \"1 h\", \"7 d\"", NK_TEXT_LEFT);
     text(d, "end", TreePath.of("time", "end"));

@@ -323,7 +323,10 @@ class SetupSessionScriptTest {
               .path("impermeable")
               .asBoolean());
       shot(wb, "parts-tab-impermeable");
+      // two undos: the part's material and the table row are as the file had them
       wb.key(GLFW.GLFW_KEY_Z, GLFW.GLFW_MOD_CONTROL);
+      wb.key(GLFW.GLFW_KEY_Z, GLFW.GLFW_MOD_CONTROL);
+      assertEquals(2, session.draft().get().tree().path("faces").path("zmax").path("value").size());
       // Ctrl+S on a file with comments asks first; No leaves the file as it was
       String before = Files.readString(hand);
       wb.key(GLFW.GLFW_KEY_S, GLFW.GLFW_MOD_CONTROL);

@@ -126,6 +126,14 @@ public final class MaterialEdits {
         });
   }
 
+  /** Gives the part values to start from: D = 1e-12 m²/s, S = 1 (to be edited). */
+  public void startingMaterial(String part) {
+    draft.edit(
+        "material for " + part,
+        tree ->
+            path(part).set(tree, F.objectNode().put("diffusivity", 1e-12).put("solubility", 1)));
+  }
+
   /** Marks the part impermeable: it is taken out of the run (see the case file's key). */
   public void impermeable(String part) {
     draft.edit(
