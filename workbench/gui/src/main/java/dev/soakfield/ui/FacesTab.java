@@ -58,7 +58,7 @@ final class FacesTab extends SetupTab {
       }
     }
     if (unset > 0) {
-      nk_layout_row_dynamic(ctx, 34, 1);
+      nk_layout_row_dynamic(ctx, 52, 1);
       nk_label_wrap(
           ctx,
           unset

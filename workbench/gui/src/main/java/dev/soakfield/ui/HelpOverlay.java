@@ -21,7 +21,7 @@ final class HelpOverlay {
     {"Space", "play or pause the time slider"},
     {"F1", "show or hide this help"},
     {"left drag / right drag / wheel", "turn / move / zoom the view"},
-    {"click, Shift+click", "select a face group, add one (Faces tab); place a probe (Probes)"},
+    {"click, Shift+click", "select a face group, add one (Faces); place a probe (Probes)"},
   };
 
   private HelpOverlay() {}
@@ -29,7 +29,7 @@ final class HelpOverlay {
   static void draw(NkContext ctx, int width, int height) {
     try (MemoryStack stack = MemoryStack.stackPush()) {
       NkRect r = NkRect.malloc(stack);
-      int w = 560;
+      int w = 700;
       int h = 24 * KEYS.length + 60;
       if (nk_begin(
           ctx,
@@ -38,9 +38,9 @@ final class HelpOverlay {
           NK_WINDOW_BORDER | NK_WINDOW_TITLE | NK_WINDOW_NO_SCROLLBAR)) {
         for (String[] k : KEYS) {
           nk_layout_row_begin(ctx, NK_DYNAMIC, 20, 2);
-          nk_layout_row_push(ctx, 0.38f);
+          nk_layout_row_push(ctx, 0.32f);
           nk_label(ctx, k[0], NK_TEXT_LEFT);
-          nk_layout_row_push(ctx, 0.62f);
+          nk_layout_row_push(ctx, 0.68f);
           nk_label(ctx, k[1], NK_TEXT_LEFT);
           nk_layout_row_end(ctx);
         }

@@ -11,14 +11,10 @@ final class StatusLine {
   static String mouse(CasePanel.Mode mode) {
     return switch (mode) {
       case PICK_FACES ->
-          "Faces: click a face group to select it, Shift+click to add or drop one; drag turns,"
-              + " right drag moves, wheel zooms";
+          "Faces: click selects a group, Shift+click adds or drops one; drag turns, wheel zooms";
       case PLACE_PROBES ->
-          "Probes: click on the part (or on the cut) to place a probe; drag turns, right drag"
-              + " moves, wheel zooms";
-      case LOOK ->
-          "Look: click on the part to see its face group and the value there through time; drag"
-              + " turns, right drag moves, wheel zooms";
+          "Probes: click on the part (or the cut) places a probe; drag turns, wheel zooms";
+      case LOOK -> "Look: click on the part shows its value through time; drag turns, wheel zooms";
     };
   }
 

@@ -383,7 +383,6 @@ class SetupSessionScriptTest {
             "Space")) {
       assertTrue(all.contains(k), k);
     }
-    assertTrue(
-        Optional.of(StatusLine.mouse(CasePanel.Mode.PICK_FACES)).get().contains("Shift+click"));
+    assertTrue(StatusLine.mouse(CasePanel.Mode.PICK_FACES).contains("Shift+click"));
   }
 }
