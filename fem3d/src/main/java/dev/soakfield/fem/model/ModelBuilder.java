@@ -119,9 +119,13 @@ public final class ModelBuilder {
               faceS,
               f.ambientValue()));
     }
-    double[] phi0 = initialPotential(spec, mesh, solubility);
+    FeSpace space = FeSpace.of(mesh);
+    double[] phi0 =
+        spec.initial().from().isPresent()
+            ? RestartState.potential(spec, mesh, space, solubility, warnings)
+            : initialPotential(spec, mesh, solubility);
     return new DiffusionModel(
-        FeSpace.of(mesh),
+        space,
         solubility,
         conductance,
         firstOrder,
@@ -135,9 +139,6 @@ public final class ModelBuilder {
   }
 
   private static double[] initialPotential(CaseSpec spec, TetMesh mesh, double[] solubility) {
-    if (spec.initial().from().isPresent()) {
-      return earlierRun(spec, mesh, spec.initial().from().get()).phi();
-    }
     double[] phi0 = new double[mesh.nodeCount()];
     double[] nodeS = new double[mesh.nodeCount()];
     for (int t = 0; t < mesh.tetCount(); t++) {
