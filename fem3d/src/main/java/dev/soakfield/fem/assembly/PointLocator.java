@@ -1,8 +1,11 @@
 package dev.soakfield.fem.assembly;
 
 import dev.soakfield.fem.element.TetBasis;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.function.IntPredicate;
 
 /**
  * Where a point lies: the containing tetrahedron and the shape-function values there, to
@@ -149,19 +152,24 @@ public final class PointLocator {
    * within 1e-9 of the bounding-box diagonal; empty when the point is farther out.
    */
   public Optional<Probe> locate(double x, double y, double z) {
-    if (!(x >= min[0] && y >= min[1] && z >= min[2] && x <= max[0] && y <= max[1] && z <= max[2])) {
+    return locate(x, y, z, t -> true);
+  }
+
+  /** As {@link #locate(double, double, double)}, among the tetrahedra {@code accept} takes. */
+  public Optional<Probe> locate(double x, double y, double z, IntPredicate accept) {
+    int b = bucketOf(x, y, z);
+    if (b < 0) {
       return Optional.empty();
     }
-    int i = Math.min(dims[0] - 1, (int) ((x - min[0]) / cell[0]));
-    int j = Math.min(dims[1] - 1, (int) ((y - min[1]) / cell[1]));
-    int k = Math.min(dims[2] - 1, (int) ((z - min[2]) / cell[2]));
-    int b = bucket(i, j, k);
     double[] l = new double[4];
     double[] best = new double[4];
     int bestTet = -1;
     double bestOut = Double.POSITIVE_INFINITY;
     for (int m = bucketStart[b]; m < bucketStart[b + 1]; m++) {
       int t = bucketTets[m];
+      if (!accept.test(t)) {
+        continue;
+      }
       double out = barycentric(t, x, y, z, l);
       if (out < bestOut) {
         bestOut = out;
@@ -189,6 +197,33 @@ public final class PointLocator {
     int[] dofs = new int[per];
     System.arraycopy(tets, bestTet * per, dofs, 0, per);
     return Optional.of(new Probe(bestTet, dofs, w));
+  }
+
+  /** Every tetrahedron the point lies in or on (within the locator's tolerance). */
+  public List<Integer> tetsAt(double x, double y, double z) {
+    List<Integer> out = new ArrayList<>();
+    int b = bucketOf(x, y, z);
+    if (b < 0) {
+      return out;
+    }
+    double[] l = new double[4];
+    for (int m = bucketStart[b]; m < bucketStart[b + 1]; m++) {
+      if (barycentric(bucketTets[m], x, y, z, l) <= tol) {
+        out.add(bucketTets[m]);
+      }
+    }
+    return out;
+  }
+
+  /** The bucket holding the point, or -1 outside the mesh's bounding box. */
+  private int bucketOf(double x, double y, double z) {
+    if (!(x >= min[0] && y >= min[1] && z >= min[2] && x <= max[0] && y <= max[1] && z <= max[2])) {
+      return -1;
+    }
+    int i = Math.min(dims[0] - 1, (int) ((x - min[0]) / cell[0]));
+    int j = Math.min(dims[1] - 1, (int) ((y - min[1]) / cell[1]));
+    int k = Math.min(dims[2] - 1, (int) ((z - min[2]) / cell[2]));
+    return bucket(i, j, k);
   }
 
   /**

@@ -250,6 +250,28 @@ final class CaseBinder {
     return ok ? Optional.of(new InitialSpec(OptionalDouble.empty(), values)) : Optional.empty();
   }
 
+  /** {@code [x, y, z]}, or {@code {"at": [x, y, z], "part": NAME}} for a point where parts meet. */
+  private Optional<ProbeSpec> probe(String name, CaseNode node, String path) {
+    String point = "a point [x, y, z] in metres";
+    if (!(node instanceof CaseNode.Obj o)) {
+      return fields
+          .numbers(node, path, 3, point + ", or {\"at\": [x, y, z], \"part\": NAME}")
+          .map(xyz -> new ProbeSpec(name, xyz[0], xyz[1], xyz[2]));
+    }
+    fields.onlyKeys(o, path, java.util.Set.of("at", "part"));
+    Optional<double[]> at =
+        fields
+            .required(o, path, "at", point)
+            .flatMap(n -> fields.numbers(n, CasePaths.child(path, "at"), 3, point));
+    Optional<String> part =
+        CaseFields.optional(o, "part")
+            .flatMap(n -> fields.text(n, CasePaths.child(path, "part"), "a part's name"));
+    boolean partOk = !o.members().containsKey("part") || part.isPresent();
+    return at.isPresent() && partOk
+        ? Optional.of(new ProbeSpec(name, at.get()[0], at.get()[1], at.get()[2], part))
+        : Optional.empty();
+  }
+
   private Optional<List<ProbeSpec>> probes(CaseNode node) {
     Optional<CaseNode.Obj> obj = fields.object(node, "probes", "an object: name → [x, y, z]");
     if (obj.isEmpty()) {
@@ -258,11 +280,10 @@ final class CaseBinder {
     List<ProbeSpec> out = new ArrayList<>();
     boolean ok = true;
     for (CaseNode.Member m : obj.get().members().values()) {
-      Optional<double[]> p =
-          fields.numbers(
-              m.value(), CasePaths.child("probes", m.key()), 3, "a point [x, y, z] in metres");
+      String path = CasePaths.child("probes", m.key());
+      Optional<ProbeSpec> p = probe(m.key(), m.value(), path);
       ok &= p.isPresent();
-      p.ifPresent(xyz -> out.add(new ProbeSpec(m.key(), xyz[0], xyz[1], xyz[2])));
+      p.ifPresent(out::add);
     }
     return ok ? Optional.of(out) : Optional.empty();
   }

@@ -1,6 +1,7 @@
 package dev.soakfield.fem.model;
 
 import dev.soakfield.fem.assembly.FeSpace;
+import dev.soakfield.fem.assembly.PointLocator;
 import dev.soakfield.fem.casefile.CaseInputException;
 import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.casefile.FaceSpec;
@@ -120,6 +121,9 @@ public final class ModelBuilder {
               f.ambientValue()));
     }
     FeSpace space = FeSpace.of(mesh);
+    if (!spec.probes().isEmpty()) {
+      ProbeSides.check(spec, mesh, new PointLocator(space));
+    }
     double[] phi0 =
         spec.initial().from().isPresent()
             ? RestartState.potential(spec, mesh, space, solubility, warnings)

@@ -2,6 +2,7 @@ package dev.soakfield.fem.run;
 
 import dev.soakfield.fem.assembly.PointLocator;
 import dev.soakfield.fem.casefile.ProbeSpec;
+import dev.soakfield.fem.model.ProbeSides;
 import dev.soakfield.fem.post.ThresholdClock;
 import dev.soakfield.fem.results.StateBundle;
 import java.util.ArrayList;
@@ -27,7 +28,7 @@ final class ProbeWatch {
       double[] phi0,
       List<String> warnings) {
     for (ProbeSpec p : specs) {
-      Optional<PointLocator.Probe> found = locator.locate(p.x(), p.y(), p.z());
+      Optional<PointLocator.Probe> found = ProbeSides.locate(p, locator.space().mesh(), locator);
       if (found.isEmpty()) {
         warnings.add("probe '" + p.name() + "' lies outside the mesh; its column is empty");
       }

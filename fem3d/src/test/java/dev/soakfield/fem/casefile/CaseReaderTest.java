@@ -397,6 +397,37 @@ class CaseReaderTest {
     Problem p = single(assertThrows(CaseInputException.class, () -> CaseReader.read(file)));
     assertEquals("probes.p", p.path());
     assertEquals(3, p.line());
-    assertEquals("found an array of 2, expected a point [x, y, z] in metres", p.message());
+    assertEquals(
+        "found an array of 2, expected a point [x, y, z] in metres, or {\"at\": [x, y, z],"
+            + " \"part\": NAME}",
+        p.message());
+  }
+
+  @Test
+  void aProbeMayNameThePartItReads() throws IOException {
+    Path file =
+        write(
+            "probes.json",
+            """
+            { "mesh": "m.msh", "materials": { "b": { "diffusivity": 1 } },
+              "time": { "end": 1 },
+              "probes": { "p": { "at": [0, 1, 2], "part": "b" }, "q": { "at": [0, 1] },
+                          "r": { "part": "b", "where": 1 } } }
+            """);
+    CaseInputException e = assertThrows(CaseInputException.class, () -> CaseReader.read(file));
+    List<String> paths = e.problems().stream().map(Problem::path).toList();
+    assertTrue(paths.contains("probes.q.at"), paths.toString());
+    assertTrue(paths.contains("probes.r.where") && paths.contains("probes.r.at"), paths.toString());
+    Path good =
+        write(
+            "good.json",
+            """
+            { "mesh": "m.msh", "materials": { "b": { "diffusivity": 1 } },
+              "time": { "end": 1 },
+              "probes": { "p": { "at": [0, 1, 2], "part": "b" }, "q": [3, 4, 5] } }
+            """);
+    CaseSpec spec = CaseReader.read(good);
+    assertEquals(new ProbeSpec("p", 0, 1, 2, java.util.Optional.of("b")), spec.probes().get(0));
+    assertEquals(new ProbeSpec("q", 3, 4, 5), spec.probes().get(1));
   }
 }

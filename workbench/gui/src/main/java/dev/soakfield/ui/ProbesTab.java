@@ -23,13 +23,14 @@ final class ProbesTab extends SetupTab {
     ProbeEdits probes = new ProbeEdits(d);
     nk_label_wrap(
         ctx,
-        "Click on the part to place a probe there (with a section on, on the cut); coordinates in"
-            + " metres, or with a unit (\"2 mm\").");
+        "Click on the part to place a probe there (with a section on, on the cut): name,"
+            + " x, y, z in metres (or \"2 mm\"), and where parts meet the part it reads.");
     for (String name : probes.names()) {
-      nk_layout_row_dynamic(ctx, 22, 3);
+      nk_layout_row_dynamic(ctx, 22, 4);
       w.field("probe name " + name, name).ifPresent(t -> probes.rename(name, t));
       w.field("probe at " + name, CaseValues.text(probes.point(name)))
-          .ifPresent(t -> d.set(TreePath.of("probes", name), t));
+          .ifPresent(t -> d.set(probes.pointPath(name), t));
+      w.field("probe part " + name, probes.part(name)).ifPresent(t -> probes.part(name, t));
       if (w.button("remove probe " + name, "remove")) {
         probes.remove(name);
       }

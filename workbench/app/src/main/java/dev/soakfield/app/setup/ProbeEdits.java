@@ -27,8 +27,37 @@ public final class ProbeEdits {
     return out;
   }
 
+  /** The probe's point: the value itself, or its "at" when it names a part. */
   public JsonNode point(String name) {
-    return TreePath.of("probes", name).in(draft.tree());
+    JsonNode p = TreePath.of("probes", name).in(draft.tree());
+    return p.isObject() ? p.path("at") : p;
+  }
+
+  /** Where the point is stored: the probe's value, or its "at". */
+  public TreePath pointPath(String name) {
+    JsonNode p = TreePath.of("probes", name).in(draft.tree());
+    return p.isObject() ? TreePath.of("probes", name, "at") : TreePath.of("probes", name);
+  }
+
+  /** The part the probe reads where parts meet, or empty text. */
+  public String part(String name) {
+    return TreePath.of("probes", name, "part").in(draft.tree()).asText("");
+  }
+
+  /** Names the part the probe reads (empty: none, the plain point form again). */
+  public void part(String name, String part) {
+    String p = part.strip();
+    draft.edit(
+        "probe " + name + " reads " + (p.isEmpty() ? "no named part" : p),
+        tree -> {
+          JsonNode point = TreePath.of("probes", name).in(tree);
+          JsonNode at = point.isObject() ? point.path("at") : point;
+          JsonNode value =
+              p.isEmpty()
+                  ? at.deepCopy()
+                  : F.objectNode().<ObjectNode>set("at", at.deepCopy()).put("part", p);
+          TreePath.of("probes", name).set(tree, value);
+        });
   }
 
   /**

@@ -187,6 +187,10 @@ class CaseDraftTest {
     undoable(d, x -> d.set(TreePath.of("threshold"), "0.5"));
     undoable(d, x -> probes.add(0.005, 0.005, 0.004));
     undoable(d, x -> probes.rename("probe-1", "centre"));
+    undoable(d, x -> probes.part("centre", "body"));
+    assertEquals("body", probes.part("centre"));
+    assertEquals(TreePath.of("probes", "centre", "at"), probes.pointPath("centre"));
+    undoable(d, x -> probes.part("centre", ""));
     undoable(d, x -> probes.remove("centre"));
     undoable(d, x -> new GroupEdits(x).rename("zmax", "lid"));
   }
