@@ -60,13 +60,19 @@ public final class CaseOverview {
       sb.append(
           String.format(
               Locale.ROOT,
-              "  %-16s D = %s, S = %s, source %s%s%n",
+              "  %-16s %s = %s%s, %s = %s%s, source %s%s%n",
               m.volumeGroup(),
+              m.diffusivityEnergy() != 0 ? "D0" : "D",
               diffusivity(m.diffusivity()),
+              energy("Q", m.diffusivityEnergy()),
+              m.solubilityEnergy() != 0 ? "S0" : "S",
               num(m.solubility()),
+              energy("dH", m.solubilityEnergy()),
               source(m.source()),
               sourceLaws(m.laws())));
     }
+    sb.append("materials at the run's temperatures:\n");
+    sb.append(EnvironmentTable.of(c));
     sb.append("face groups:\n");
     List<String> unassigned = new ArrayList<>();
     for (FaceGroup g : mesh.faceGroups()) {
@@ -218,6 +224,12 @@ public final class CaseOverview {
       named.add(l.id() + (given.isEmpty() ? "" : " (" + String.join(", ", given) + ")"));
     }
     return "; source laws " + String.join(" + ", named);
+  }
+
+  private static String energy(String name, double joulesPerMole) {
+    return joulesPerMole == 0
+        ? ""
+        : String.format(Locale.ROOT, " (%s = %.4g kJ/mol)", name, joulesPerMole / 1000);
   }
 
   private static String num(double v) {

@@ -1,5 +1,6 @@
 package dev.soakfield.app;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.soakfield.fem.run.RunPipeline;
@@ -45,5 +46,35 @@ class CaseOverviewTest {
     assertTrue(text.contains("outputs: fields at 60.0 min, 2.00 h; series.csv every step"), text);
     assertTrue(text.contains("probes core; threshold 0.5000"), text);
     assertTrue(text.contains("1.0 GB available"), text);
+  }
+
+  @Test
+  void materialsAreShownAtEachSegmentsTemperatureWithTheSaturationLevel() throws IOException {
+    for (String f : new String[] {"sensor-pod.msh", "sensor-pod-humid.case.json"}) {
+      try (var in = CaseOverviewTest.class.getResourceAsStream("/samples/" + f)) {
+        Files.copy(in, dir.resolve(f));
+      }
+    }
+    String text =
+        CaseOverview.of(RunPipeline.prepare(dir.resolve("sensor-pod-humid.case.json")), 1L << 30);
+    // pre-factors are named as such, never as values
+    assertTrue(text.contains("D0 = 4.700e-06 m²/s (Q = 42.00 kJ/mol)"), text);
+    // 85 °C: S = 4e-10 · exp(38000 / (8.314462618 · 358.15)) = 1.393e-4 (Pa⁻¹), and with
+    // RH 0.85 of p_sat(85 °C) = 57.87 kPa (IAPWS-IF97 saturation pressure, from memory to 4
+    // digits) the saturation level is 1.393e-4 · 0.85 · 57868 = 6.85 kg/m³
+    double s85 = 4e-10 * Math.exp(38000 / (8.314462618 * 358.15));
+    assertEquals(1.393e-4, s85, 1e-7);
+    java.util.regex.Matcher m =
+        java.util.regex.Pattern.compile(
+                "segment 1, 0 s to 7 d, 85.0 °C:\\n\\s+body\\s+D = ([0-9.e+-]+) m²/s, S = ([0-9.e+-]+) \\(amount/m³\\)/Pa, saturation c = ([0-9.e+-]+) amount/m³")
+            .matcher(text);
+    assertTrue(m.find(), text);
+    assertEquals(s85, Double.parseDouble(m.group(2)), 1e-3 * s85);
+    assertEquals(s85 * 0.85 * 57868, Double.parseDouble(m.group(3)), 2e-3 * 6.85);
+    // D = 4.7e-6 · exp(-42000 / (8.314462618 · 358.15)) (the Arrhenius law itself)
+    assertEquals(
+        4.7e-6 * Math.exp(-42000 / (8.314462618 * 358.15)), Double.parseDouble(m.group(1)), 1e-15);
+    // the dry bake drives towards nothing
+    assertTrue(text.contains("125.0 °C:"), text);
   }
 }
