@@ -31,7 +31,6 @@ public record TimeSpec(
     }
   }
 
-  /** The output times as a new array. */
   /** Time control without a stop condition. */
   public TimeSpec(
       double end,
@@ -42,6 +41,7 @@ public record TimeSpec(
     this(end, outputs, scheme, capacity, steps, Optional.empty());
   }
 
+  /** The output times as a new array. */
   public double[] outputTimes() {
     double[] t = new double[outputs.size()];
     for (int i = 0; i < t.length; i++) {

@@ -61,6 +61,7 @@ public final class ModelBuilder {
               name, byGroup[g].solubilityEnergy(), byGroup[g].diffusivityEnergy(), uses));
     }
     double[] solubility = new double[tets];
+    double[] meanD = new double[tets];
     double[] conductance = new double[6 * tets];
     double[] firstOrder = new double[tets];
     double[] constant = new double[tets];
@@ -73,6 +74,7 @@ public final class ModelBuilder {
       double dFactor = new Arrhenius(1.0, m.diffusivityEnergy()).at(tRef);
       solubility[t] = s;
       double[] d = m.diffusivity().tensor();
+      meanD[t] = (d[0] + d[1] + d[2]) / 3 * dFactor;
       for (int k = 0; k < 6; k++) {
         conductance[6 * t + k] = d[k] * dFactor * s;
       }
@@ -88,6 +90,7 @@ public final class ModelBuilder {
             ? Optional.of(AmbientPotential.of(spec.law(), spec.exposure().get()))
             : Optional.empty();
     int[] owner = FaceOwners.of(mesh);
+    warnings.addAll(NearSurfaceCheck.warnings(spec, mesh, owner, meanD));
     List<FaceCondition> faces = new ArrayList<>();
     for (FaceSpec f : spec.faces().values()) {
       if (f.kind() == FaceKind.SEALED) {
