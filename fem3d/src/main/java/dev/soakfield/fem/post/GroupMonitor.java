@@ -12,6 +12,7 @@ public final class GroupMonitor {
   private final double[] solubilityPerTet;
   private final double[] groupSolubility;
   private final int[][] groupNodes;
+  private final int[][] freeNodes;
   private final double threshold;
   private final double[] firstTime;
   private double[] previousMax;
@@ -20,9 +21,15 @@ public final class GroupMonitor {
    * Starts the monitor at the initial state.
    *
    * @param threshold threshold concentration, or NaN for none
+   * @param prescribed nodes whose value a face sets: left out of the first arrival (they have the
+   *     face's value from the start, which says nothing about the part), kept in the maxima
    */
   public GroupMonitor(
-      SystemAssembler assembler, double[] solubilityPerTet, double threshold, double[] phi0) {
+      SystemAssembler assembler,
+      double[] solubilityPerTet,
+      double threshold,
+      double[] phi0,
+      boolean[] prescribed) {
     this.assembler = assembler;
     this.solubilityPerTet = solubilityPerTet.clone();
     TetMesh mesh = assembler.space().mesh();
@@ -38,6 +45,7 @@ public final class GroupMonitor {
       }
     }
     groupNodes = new int[groups][];
+    freeNodes = new int[groups][];
     for (int g = 0; g < groups; g++) {
       int count = 0;
       for (boolean b : member[g]) {
@@ -51,11 +59,12 @@ public final class GroupMonitor {
         }
       }
       groupNodes[g] = nodes;
+      freeNodes[g] = java.util.Arrays.stream(nodes).filter(v -> !prescribed[v]).toArray();
     }
     this.threshold = threshold;
     firstTime = new double[groups];
     java.util.Arrays.fill(firstTime, -1);
-    previousMax = maxima(phi0);
+    previousMax = maxima(phi0, freeNodes);
     for (int g = 0; g < groups; g++) {
       if (previousMax[g] >= threshold) {
         firstTime[g] = 0;
@@ -93,10 +102,14 @@ public final class GroupMonitor {
 
   /** Largest nodal c per volume group. */
   public double[] maxima(double[] phi) {
-    double[] m = new double[groupNodes.length];
+    return maxima(phi, groupNodes);
+  }
+
+  private double[] maxima(double[] phi, int[][] nodesOf) {
+    double[] m = new double[nodesOf.length];
     for (int g = 0; g < m.length; g++) {
       double best = Double.NEGATIVE_INFINITY;
-      for (int v : groupNodes[g]) {
+      for (int v : nodesOf[g]) {
         best = Math.max(best, phi[v]);
       }
       m[g] = groupSolubility[g] * best;
@@ -106,14 +119,14 @@ public final class GroupMonitor {
 
   /** Records the step ending at t; returns the maxima at t. */
   public double[] step(double t, double dt, double[] phi) {
-    double[] max = maxima(phi);
-    for (int g = 0; g < max.length; g++) {
-      if (firstTime[g] < 0 && max[g] >= threshold) {
-        firstTime[g] = ThresholdClock.crossing(t - dt, previousMax[g], t, max[g], threshold);
+    double[] free = maxima(phi, freeNodes);
+    for (int g = 0; g < free.length; g++) {
+      if (firstTime[g] < 0 && free[g] >= threshold) {
+        firstTime[g] = ThresholdClock.crossing(t - dt, previousMax[g], t, free[g], threshold);
       }
     }
-    previousMax = max;
-    return max;
+    previousMax = free;
+    return maxima(phi);
   }
 
   /** Per group: when its largest c first reached the threshold, -1 where never (a copy). */

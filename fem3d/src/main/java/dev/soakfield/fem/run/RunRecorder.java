@@ -97,7 +97,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     double threshold = spec.threshold().orElse(Double.NaN);
     temperatureNow = model.referenceTemperature();
     tetS = model.solubility();
-    parts = new GroupMonitor(asm, tetS, threshold, phi0);
+    parts = new GroupMonitor(asm, tetS, threshold, phi0, stepper.prescribedNodes());
     nodalS = NodalSolubility.of(mesh, tetS);
     clock = new ThresholdClock(spec.threshold().orElse(Double.POSITIVE_INFINITY), nodalS, phi0);
     probes =

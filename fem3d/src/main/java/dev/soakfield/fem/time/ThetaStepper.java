@@ -92,6 +92,11 @@ public final class ThetaStepper {
     return laws.isEmpty() ? new double[n] : laws.trappedField(temperatureAt(t));
   }
 
+  /** Which nodes a concentration or ambient face prescribes (a copy). */
+  public boolean[] prescribedNodes() {
+    return boundary.isPrescribed.clone();
+  }
+
   /** True when some material carries a source law (the outputs then show the trapped amount). */
   public boolean hasSourceLaws() {
     return !laws.isEmpty();

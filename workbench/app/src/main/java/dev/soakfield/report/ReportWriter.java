@@ -258,7 +258,12 @@ public final class ReportWriter {
       doc.paragraph("The case sets no threshold.");
       return;
     }
-    doc.paragraph("First time the concentration reaches " + text(th.path("value")) + ":");
+    doc.paragraph(
+        "First time the concentration reaches "
+            + text(th.path("value"))
+            + ". For a part, the first node of it to get there; nodes on faces whose"
+            + " concentration the case sets are left out, since they hold the face's value from"
+            + " the start:");
     List<List<String>> rows = new ArrayList<>();
     for (String kind : List.of("volume_groups", "probes")) {
       for (Map.Entry<String, JsonNode> e : th.path("first_time").path(kind).properties()) {
