@@ -96,6 +96,15 @@ public final class TimeTable implements TimeFunction {
     return true;
   }
 
+  /** Largest value the table takes (at a breakpoint, since it is piecewise linear). */
+  public double max() {
+    double m = values[0];
+    for (int i = 1; i < values.length; i++) {
+      m = Math.max(m, values[i]);
+    }
+    return m;
+  }
+
   /** Smallest value the table takes (at a breakpoint, since it is piecewise linear). */
   public double min() {
     double m = values[0];
