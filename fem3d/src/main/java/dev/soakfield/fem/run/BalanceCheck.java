@@ -8,9 +8,9 @@ import java.util.Locale;
 
 /**
  * The last guard before a run is called finished: the amount must balance (change = inflow +
- * sources) to within {@link #LIMIT} of the amounts moved. A run that converged step by step closes
- * it to about 1e-11; one that does not has solved something else than the case, and its numbers
- * must not leave with exit code 0.
+ * sources) to within {@link #LIMIT} of the amounts moved or present. A run that converged step by
+ * step closes it to about 1e-11; one that does not has solved something else than the case, and its
+ * numbers must not leave with exit code 0.
  */
 final class BalanceCheck {
   /** The largest relative balance error a finished run may have. */
@@ -29,7 +29,8 @@ final class BalanceCheck {
         new StringBuilder(
             String.format(
                 Locale.ROOT,
-                "the amount does not balance: error %.3g of the amounts moved, more than %.0e;"
+                "the amount does not balance: error %.3g of the amounts moved or present, more than"
+                    + " %.0e;"
                     + " the results are not a solution of the case",
                 relativeError,
                 LIMIT));

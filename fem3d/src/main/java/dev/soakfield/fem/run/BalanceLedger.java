@@ -64,6 +64,18 @@ final class BalanceLedger {
     return scale > 0 ? Math.abs(error()) / scale : 0.0;
   }
 
+  /**
+   * The error against the larger of the amounts moved and the amounts present: a sealed part moves
+   * nothing, and its round-off must not read as a failure.
+   */
+  double relativeToAmounts() {
+    double scale =
+        Math.max(
+            Math.max(moved, Math.abs(amountNow - amount0)),
+            Math.max(Math.abs(amount0), Math.abs(amountNow)));
+    return scale > 0 ? Math.abs(error()) / scale : 0.0;
+  }
+
   void snapshot(StateBundle b) {
     b.put("rec.inflow", cumulativeInflow);
   }

@@ -218,7 +218,7 @@ public final class RunPipeline {
               TransientRun.run(stepper, model.initialPhi(), settings, relay, checkpoints, cursor);
         }
         recorder.finish(totals);
-        BalanceCheck.require(recorder.balanceRelative(), spec, totals.endTime());
+        BalanceCheck.require(recorder.balanceAgainstAmounts(), spec, totals.endTime());
       } catch (IOException | UncheckedIOException e) {
         IOException cause = e instanceof UncheckedIOException u ? u.getCause() : (IOException) e;
         log.line("failed: writing results: " + cause);

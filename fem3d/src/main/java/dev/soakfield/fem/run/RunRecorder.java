@@ -189,6 +189,11 @@ final class RunRecorder implements StepListener, AutoCloseable {
     return balance.relative();
   }
 
+  /** The balance error against the amounts moved or present (what the final guard reads). */
+  double balanceAgainstAmounts() {
+    return balance.relativeToAmounts();
+  }
+
   @Override
   public boolean stopRequested() {
     return stop.met(lastTime, lastMaxima, probes.last());
