@@ -188,7 +188,13 @@ public final class BakeSearch {
     }
     TimeSpec time =
         new TimeSpec(
-            duration, List.of(duration), TimeScheme.BACKWARD_EULER, old.capacity(), steps, stop);
+            duration,
+            List.of(duration),
+            TimeScheme.BACKWARD_EULER,
+            old.capacity(),
+            steps,
+            stop,
+            old.balanceLimit());
     return new RunPipeline.Prepared(
         spec.withEnvironment(Optional.of(oneSegment), time), base.mesh(), base.warnings());
   }

@@ -24,7 +24,8 @@ final class TimeBinder {
           "step",
           "initial_step",
           "max_step",
-          "stop");
+          "stop",
+          "balance_limit");
   private static final String SECONDS = "a positive duration (seconds, or with a unit: \"168 h\")";
 
   private final CaseFields fields;
@@ -102,7 +103,18 @@ final class TimeBinder {
                   + "); take a longer step or adaptive steps");
       steps = Optional.empty();
     }
+    OptionalDouble limit = OptionalDouble.of(TimeSpec.DEFAULT_BALANCE_LIMIT);
+    Optional<CaseNode> limitNode = CaseFields.optional(obj, "balance_limit");
+    if (limitNode.isPresent()) {
+      String limitPath = CasePaths.child(path, "balance_limit");
+      limit = fields.number(limitNode.get(), limitPath, "a relative balance error in (0, 1]");
+      if (limit.isPresent() && !(limit.getAsDouble() > 0 && limit.getAsDouble() <= 1)) {
+        fields.problems().found(limitNode.get(), limitPath, "a relative balance error in (0, 1]");
+        limit = OptionalDouble.empty();
+      }
+    }
     if (stop.isEmpty()
+        || limit.isEmpty()
         || end.isEmpty()
         || outputs.isEmpty()
         || scheme.isEmpty()
@@ -117,7 +129,8 @@ final class TimeBinder {
             scheme.get(),
             capacity.get(),
             steps.get(),
-            stop.get()));
+            stop.get(),
+            limit.getAsDouble()));
   }
 
   private Optional<StopSpec> stop(CaseNode node, String path) {

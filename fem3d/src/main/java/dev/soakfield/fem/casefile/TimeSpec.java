@@ -12,6 +12,8 @@ import java.util.Optional;
  * @param scheme theta scheme
  * @param capacity consistent or lumped capacity matrix
  * @param steps adaptive or fixed steps
+ * @param stop a condition that ends the run early, when given
+ * @param balanceLimit the largest relative balance error a finished run may have
  */
 public record TimeSpec(
     double end,
@@ -19,7 +21,11 @@ public record TimeSpec(
     TimeScheme scheme,
     CapacityForm capacity,
     StepControl steps,
-    Optional<StopSpec> stop) {
+    Optional<StopSpec> stop,
+    double balanceLimit) {
+  /** The balance limit when the case gives none. */
+  public static final double DEFAULT_BALANCE_LIMIT = 1e-8;
+
   public TimeSpec {
     outputs = List.copyOf(outputs);
     Objects.requireNonNull(scheme, "scheme");
@@ -29,6 +35,20 @@ public record TimeSpec(
     if (!(end > 0) || !Double.isFinite(end)) {
       throw new IllegalArgumentException("end must be positive, got " + end);
     }
+    if (!(balanceLimit > 0 && balanceLimit <= 1)) {
+      throw new IllegalArgumentException("balance limit must lie in (0, 1], got " + balanceLimit);
+    }
+  }
+
+  /** Time control with the default balance limit. */
+  public TimeSpec(
+      double end,
+      List<Double> outputs,
+      TimeScheme scheme,
+      CapacityForm capacity,
+      StepControl steps,
+      Optional<StopSpec> stop) {
+    this(end, outputs, scheme, capacity, steps, stop, DEFAULT_BALANCE_LIMIT);
   }
 
   /** Time control without a stop condition. */

@@ -8,21 +8,19 @@ import java.util.Locale;
 
 /**
  * The last guard before a run is called finished: the amount must balance (change = inflow +
- * sources) to within {@link #LIMIT} of the amounts moved or present. A run that converged step by
- * step closes it to about 1e-11; one that does not has solved something else than the case, and its
- * numbers must not leave with exit code 0.
+ * sources) to within the case's {@code time.balance_limit} (1e-8 unless raised) of the amounts
+ * moved or present. A run that converged step by step closes it to about 1e-11; one that does not
+ * has solved something else than the case, and its numbers must not leave with exit code 0.
  */
 final class BalanceCheck {
-  /** The largest relative balance error a finished run may have. */
-  static final double LIMIT = 1e-8;
-
   private BalanceCheck() {}
 
   /**
    * @throws RunFailedException when the balance error exceeds the limit (or is not a number)
    */
   static void require(double relativeError, CaseSpec spec, double reached) {
-    if (relativeError <= LIMIT) {
+    double limit = spec.time().balanceLimit();
+    if (relativeError <= limit) {
       return;
     }
     StringBuilder why =
@@ -33,7 +31,7 @@ final class BalanceCheck {
                     + " %.0e;"
                     + " the results are not a solution of the case",
                 relativeError,
-                LIMIT));
+                limit));
     double strongest = 0;
     String face = "";
     for (FaceSpec f : spec.faces().values()) {
@@ -53,6 +51,9 @@ final class BalanceCheck {
               face,
               strongest));
     }
+    why.append(
+        ". If this accuracy is enough for the purpose, raise the limit with"
+            + " \"time\": {\"balance_limit\": ...}");
     throw new RunFailedException(reached, why.toString(), null);
   }
 }

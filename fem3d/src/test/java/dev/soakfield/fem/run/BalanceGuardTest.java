@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.soakfield.fem.casefile.TimeSpec;
 import dev.soakfield.fem.results.RunManifest;
 import dev.soakfield.fem.time.RunFailedException;
 import dev.soakfield.mesh.gen.StructuredMesher;
@@ -24,16 +25,20 @@ class BalanceGuardTest {
   @TempDir Path dir;
 
   private Path box(double h) throws IOException {
+    return box(h, "");
+  }
+
+  private Path box(double h, String time) throws IOException {
     MshWriter.write(
         dir.resolve("box.msh"), StructuredMesher.box(6e-3, 6e-3, 3e-3, 6, 6, 3, 1), false);
     return Files.writeString(
-        dir.resolve("box-" + h + ".json"),
+        dir.resolve("box-" + h + time.length() + ".json"),
         """
         { "mesh": "box.msh", "materials": { "body": { "diffusivity": 1e-10 } },
           "faces": { "zmax": { "kind": "exchange", "coefficient": %s, "value": 1.0 } },
-          "time": { "end": 3600 } }
+          "time": { "end": 3600 %s } }
         """
-            .formatted(h));
+            .formatted(h, time));
   }
 
   @Test
@@ -44,10 +49,23 @@ class BalanceGuardTest {
             RunFailedException.class, () -> RunPipeline.run(box(1e6), out, RunProgress.SILENT));
     assertTrue(e.getMessage().contains("the amount does not balance"), e.getMessage());
     assertTrue(e.getMessage().contains("exchange face 'zmax'"), e.getMessage());
+    assertTrue(e.getMessage().contains("balance_limit"), e.getMessage());
     RunManifest m = RunManifest.readFrom(out).orElseThrow();
     assertEquals(RunManifest.Status.FAILED, m.status());
     // negative control: 1e-7 m/s, about D over the element size (1e-10 m²/s / 1 mm), balances
     RunSummary moderate = RunPipeline.run(box(1e-7), dir.resolve("moderate"), RunProgress.SILENT);
-    assertTrue(moderate.balanceRelative() < BalanceCheck.LIMIT, "" + moderate.balanceRelative());
+    assertTrue(
+        moderate.balanceRelative() < TimeSpec.DEFAULT_BALANCE_LIMIT,
+        "" + moderate.balanceRelative());
+  }
+
+  @Test
+  void theCaseMayRaiseTheLimitOnPurpose() throws IOException {
+    // the same strong face with the limit raised to 1: the run finishes and its summary shows the
+    // error it has (the user asked for it)
+    RunSummary s =
+        RunPipeline.run(
+            box(1e6, ", \"balance_limit\": 1"), dir.resolve("raised"), RunProgress.SILENT);
+    assertTrue(s.balanceRelative() > TimeSpec.DEFAULT_BALANCE_LIMIT, "" + s.balanceRelative());
   }
 }
