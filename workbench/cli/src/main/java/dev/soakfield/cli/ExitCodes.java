@@ -47,7 +47,7 @@ public final class ExitCodes {
             err.println("soakfield: internal error, please report it with the trace below.");
             ex.printStackTrace(err);
           } else {
-            err.println("soakfield: " + ex.getMessage());
+            err.println("soakfield: " + message(ex));
           }
           err.flush();
           return code;
@@ -70,10 +70,31 @@ public final class ExitCodes {
         || ex instanceof SourceLawException) {
       return NUMERICAL_FAILURE;
     }
-    if (ex instanceof java.nio.file.NoSuchFileException
-        || ex instanceof java.nio.file.AccessDeniedException) {
-      return BAD_INPUT;
+    if (ex instanceof java.io.IOException || ex instanceof java.io.UncheckedIOException) {
+      return BAD_INPUT; // a missing, read-only or full place on disk: the user's to change
     }
     return INTERNAL_ERROR;
+  }
+
+  /** What the user reads: for a file system failure, the file and the reason in words. */
+  static String message(Throwable ex) {
+    Throwable io = ex instanceof java.io.UncheckedIOException u ? u.getCause() : ex;
+    if (io instanceof java.nio.file.FileSystemException f) {
+      String reason =
+          f instanceof java.nio.file.NoSuchFileException
+              ? "no such file or folder"
+              : f instanceof java.nio.file.AccessDeniedException
+                  ? "permission denied"
+                  : f instanceof java.nio.file.FileAlreadyExistsException
+                      ? "a file of that name is in the way (a folder was expected)"
+                      : f instanceof java.nio.file.NotDirectoryException
+                          ? "not a folder"
+                          : f.getReason() != null ? f.getReason() : "the file system refused";
+      return "could not use " + f.getFile() + ": " + reason;
+    }
+    if (io instanceof java.io.IOException) {
+      return "a file could not be read or written: " + io.getMessage();
+    }
+    return String.valueOf(ex.getMessage());
   }
 }

@@ -158,6 +158,12 @@ final class RenderCommand implements Callable<Integer> {
       if (s.field().isEmpty()) {
         throw new UserInputException("--iso: isosurfaces need a field from a result folder");
       }
+      for (double level : iso) {
+        if (!Double.isFinite(level)) {
+          throw new UserInputException(
+              "--iso: found " + level + ", expected finite levels (concentrations), e.g. 0.5,1");
+        }
+      }
       s.isoLevels(iso);
     }
     if (range != null) {

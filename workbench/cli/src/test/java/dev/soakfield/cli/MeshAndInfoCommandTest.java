@@ -187,4 +187,23 @@ class MeshAndInfoCommandTest {
       assertTrue(r.out().contains("Usage:"), String.join(" ", cmd));
     }
   }
+
+  @Test
+  void aPlaceThatCannotBeWrittenIsNamedWithoutAStackTrace() throws Exception {
+    // a file where a folder is expected: the mesh cannot be written there
+    Path blocker = java.nio.file.Files.writeString(dir.resolve("blocker"), "x");
+    CliRun r =
+        CliRun.of(
+            "mesh",
+            "box",
+            "--size",
+            "1mm,1mm,1mm",
+            "--cells",
+            "1,1,1",
+            "--out",
+            blocker.resolve("box.msh").toString());
+    assertEquals(ExitCodes.BAD_INPUT, r.exitCode(), r.err());
+    assertTrue(r.err().contains("could not use " + blocker + ": a file of that name"), r.err());
+    assertTrue(!r.err().contains("\tat "), r.err());
+  }
 }

@@ -98,6 +98,10 @@ class RenderCommandTest {
         CliRun.of("render", results.toString(), "--view", "front", "--out", pic.toString());
     assertEquals(2, view.exitCode());
     assertTrue(view.err().contains("--view: view: found 'front', expected iso, xmin"), view.err());
+    CliRun nan = CliRun.of("render", results.toString(), "--iso", "NaN", "--out", pic.toString());
+    assertEquals(2, nan.exitCode());
+    assertTrue(nan.err().contains("--iso: found NaN, expected finite levels"), nan.err());
+    assertTrue(!nan.err().contains("\tat "), nan.err());
     CliRun section =
         CliRun.of("render", results.toString(), "--section", "w:1", "--out", pic.toString());
     assertEquals(2, section.exitCode());
