@@ -114,7 +114,7 @@ public final class ReportWriter {
       doc.heading("Curves").paragraph("No series.csv in the folder: the run wrote no steps.");
     }
     threshold(doc, summary);
-    figures(doc, summary);
+    figures(doc, summary, series);
     warnings(doc, manifest, summary);
     pictures(doc, folder);
     doc.heading("Cautions");
@@ -280,7 +280,7 @@ public final class ReportWriter {
     doc.table(List.of("where", "name", "first time"), rows);
   }
 
-  private static void figures(ReportDocument doc, JsonNode summary) {
+  private static void figures(ReportDocument doc, JsonNode summary, Optional<Series> series) {
     doc.heading("Mesh, solver and balance");
     if (summary.isMissingNode()) {
       doc.paragraph("No summary.json: the run did not finish.");
@@ -297,7 +297,19 @@ public final class ReportWriter {
     rows.add(List.of("rejected steps", text(solver.path("rejected_steps"))));
     rows.add(List.of("linear solver iterations", text(solver.path("linear_iterations"))));
     rows.add(List.of("end time", DurationText.of(solver.path("end_time").asDouble(Double.NaN))));
-    rows.add(List.of("amount at start", num(balance.path("amount_start").asDouble(Double.NaN))));
+    rows.add(
+        List.of(
+            "amount at start, before the faces take their values",
+            num(balance.path("amount_start").asDouble(Double.NaN))));
+    // the series' first row comes after held and ambient faces set their nodes: say both
+    series
+        .filter(s -> s.has("amount") && s.rows() > 0)
+        .ifPresent(
+            s ->
+                rows.add(
+                    List.of(
+                        "amount at t = 0 with the faces' values (the first row of series.csv)",
+                        num(s.require("amount")[0]))));
     rows.add(List.of("amount at end", num(balance.path("amount_end").asDouble(Double.NaN))));
     rows.add(
         List.of(

@@ -60,6 +60,16 @@ class ResultCommandsTest {
             "licensed engineer")) {
       assertTrue(html.contains(s), s);
     }
+    // the start amount before the faces take their values, and the series' first row after
+    double firstRow =
+        dev.soakfield.fem.results.Series.read(out.resolve("series.csv")).require("amount")[0];
+    assertTrue(firstRow > 0, "the demo's held top fills its nodes at t = 0");
+    assertTrue(
+        html.contains(
+            "amount at t = 0 with the faces&#39; values (the first row of series.csv)"
+                .replace("&#39;", "'")),
+        "first-row label");
+    assertTrue(html.contains(String.format(java.util.Locale.ROOT, "%.4g", firstRow)), html);
     String md = Files.readString(out.resolve("report.md"));
     assertTrue(md.contains("![Uptake: amount in the part over time](report-uptake.png)"), md);
     assertTrue(Files.size(out.resolve("report-uptake.png")) > 1000);
