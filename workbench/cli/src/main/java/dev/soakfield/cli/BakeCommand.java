@@ -3,8 +3,8 @@ package dev.soakfield.cli;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.soakfield.fem.bake.BakeSearch;
-import dev.soakfield.fem.model.LawResolver;
 import dev.soakfield.fem.units.DurationText;
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -15,6 +15,7 @@ import java.util.concurrent.Callable;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -36,6 +37,8 @@ final class BakeCommand implements Callable<Integer> {
       Pattern.compile("(max|probe):([^<]+)<\\s*([-+0-9.eE]+)\\s*");
 
   @Spec CommandSpec spec;
+
+  @Mixin PluginFolderOption pluginFolders;
 
   @Parameters(index = "0", paramLabel = "CASE.json", description = "The case file.")
   Path caseFile;
@@ -111,12 +114,12 @@ final class BakeCommand implements Callable<Integer> {
               new BakeSearch.Oven(kelvin, humidity, pa, longestS),
               t,
               tolerance,
-              LawResolver.none(),
+              pluginFolders.catalog().resolver(),
               work);
     } catch (IllegalArgumentException e) {
       throw new UserInputException(e.getMessage());
     } finally {
-      Files.deleteIfExists(work);
+      deleteQuietly(work); // a failed clean-up must not hide why the search failed
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json) {
@@ -167,5 +170,15 @@ final class BakeCommand implements Callable<Integer> {
         "caution: bake schedules are governed by the applicable standards (moisture-sensitivity"
             + " handling, hydrogen-embrittlement relief); this estimate depends on the material data"
             + " and on Fickian diffusion and needs a qualified engineer's review.");
+  }
+
+  private static void deleteQuietly(Path folder) {
+    try (var all = Files.walk(folder)) {
+      for (Path p : all.sorted(java.util.Comparator.reverseOrder()).toList()) {
+        Files.deleteIfExists(p);
+      }
+    } catch (IOException | java.io.UncheckedIOException e) {
+      // the temporary folder stays; the system's clean-up of its temporary files takes it
+    }
   }
 }

@@ -72,4 +72,34 @@ class BakeCommandTest {
     assertEquals(2, r.exitCode());
     assertTrue(r.err().contains("expected one of body"), r.err());
   }
+
+  @Test
+  void aPartWithEquilibriumTrapsBakesAtItsEffectiveDiffusivity() throws IOException {
+    MshWriter.write(
+        dir.resolve("sheet.msh"), StructuredMesher.box(1e-3, 1e-4, 1e-4, 20, 1, 1, 1), false);
+    Path part =
+        Files.writeString(
+            dir.resolve("trapped.json"),
+            """
+            { "mesh": "sheet.msh", "temperature": "25 degC",
+              "materials": { "body": { "diffusivity": 1e-9,
+                "source": { "law": "trap-equilibrium", "trap-density": "1e23",
+                            "lattice-density": 5.1e29, "binding-energy": 6e4 } } },
+              "faces": { "xmin": { "kind": "concentration", "value": 0.0 },
+                         "xmax": { "kind": "concentration", "value": 0.0 } },
+              "initial": 1.0, "time": { "end": 1 } }
+            """);
+    CliRun r =
+        CliRun.of(
+            "bake", part.toString(), "--temperature", "400", "--target", "max:body<0.1", "--json");
+    assertEquals(0, r.exitCode(), r.err());
+    double bake = new ObjectMapper().readTree(r.out()).get("bake_time").asDouble();
+    // Oriani (1970), dilute limit: D_eff = D / (1 + (N_T / N_L) exp(E_b / R T)); the sheet's
+    // centre then falls as in Crank's eq. 4.17 with D_eff
+    double k = 1 / 5.1e6 * Math.exp(6e4 / (8.314462618 * 400)); // N_T/N_L = 1e23/5.1e29
+    double dEff = 1e-9 / (1 + k);
+    double expected = -Math.log(0.1 * Math.PI / 4) / (Math.PI * Math.PI) * 1e-6 / dEff;
+    assertTrue(k > 5, "traps matter here: K = " + k);
+    assertEquals(expected, bake, 0.03 * expected);
+  }
 }
