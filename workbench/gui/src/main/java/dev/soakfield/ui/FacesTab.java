@@ -54,7 +54,7 @@ final class FacesTab extends SetupTab {
         nk_label(ctx, "interface (joins its parts)", NK_TEXT_LEFT);
       } else {
         unset++;
-        w.label("no entry: sealed by default", 0xa07800);
+        w.label("no entry: sealed by default", KindColours.NO_ENTRY);
       }
     }
     if (unset > 0) {

@@ -26,7 +26,7 @@ final class StatusLine {
         ctx, mouse(wb.casePanel().mode()) + (hover.isEmpty() ? "" : "  |  " + hover), NK_TEXT_LEFT);
     String m = wb.actions().message();
     if (!m.isEmpty()) {
-      w.label(m, wb.actions().messageIsError() ? 0xb02020 : 0x205020);
+      w.label(m, wb.actions().messageIsError() ? 0xff7a7a : 0x8fd18f); // readable on the dark strip
     }
   }
 }

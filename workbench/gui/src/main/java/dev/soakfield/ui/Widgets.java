@@ -134,7 +134,7 @@ final class Widgets implements AutoCloseable {
     for (String m : messages) {
       nk_layout_row_dynamic(ctx, 34, 1);
       try (MemoryStack stack = MemoryStack.stackPush()) {
-        NkColor red = NkColor.malloc(stack).set((byte) 0xc0, (byte) 0x20, (byte) 0x20, (byte) 255);
+        NkColor red = NkColor.malloc(stack).set((byte) 0xff, (byte) 0x7a, (byte) 0x7a, (byte) 255);
         nk_label_colored_wrap(ctx, m, red);
       }
     }
