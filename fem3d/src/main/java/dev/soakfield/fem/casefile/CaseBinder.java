@@ -2,6 +2,7 @@ package dev.soakfield.fem.casefile;
 
 import dev.soakfield.fem.physics.ExposureHistory;
 import dev.soakfield.fem.physics.SorptionLaw;
+import dev.soakfield.fem.units.Quantities;
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -27,7 +28,10 @@ final class CaseBinder {
           "initial",
           "time",
           "probes",
-          "threshold");
+          "threshold",
+          "thresholds",
+          "species",
+          "units");
 
   private final CaseFields fields;
   private final Path caseFile;
@@ -134,7 +138,22 @@ final class CaseBinder {
           fields.positive(thresholdNode.get(), "threshold", "a positive concentration");
       threshold = t.isPresent() ? Optional.of(t) : Optional.empty();
     }
+    Optional<Quantities> quantities =
+        new UnitsBinder(fields)
+            .bind(
+                CaseFields.optional(obj, "species"),
+                CaseFields.optional(obj, "units"),
+                materials,
+                CaseFields.optional(obj, "materials"));
+    Optional<List<ThresholdSpec>> thresholds = Optional.of(List.of());
+    Optional<CaseNode> thresholdsNode = CaseFields.optional(obj, "thresholds");
+    if (thresholdsNode.isPresent() && materials.isPresent() && probes.isPresent()) {
+      thresholds =
+          new ThresholdBinder(fields).bind(thresholdsNode.get(), materials.get(), probes.get());
+    }
     if (mesh.isEmpty()
+        || quantities.isEmpty()
+        || thresholds.isEmpty()
         || law.isEmpty()
         || !temperatureOk
         || exposure.isEmpty()
@@ -161,7 +180,9 @@ final class CaseBinder {
             PlaceIndex.of(root),
             law.get(),
             temperature,
-            exposure.get()));
+            exposure.get(),
+            quantities.get(),
+            thresholds.get()));
   }
 
   private Optional<Path> mesh(CaseNode node) {

@@ -3,6 +3,7 @@ package dev.soakfield.fem.casefile;
 import dev.soakfield.fem.physics.ExposureHistory;
 import dev.soakfield.fem.physics.SorptionLaw;
 import dev.soakfield.fem.physics.TimeFunction;
+import dev.soakfield.fem.units.Quantities;
 import java.nio.file.Path;
 import java.util.Collections;
 import java.util.LinkedHashMap;
@@ -29,6 +30,8 @@ import java.util.OptionalDouble;
  * @param law how the potential relates to the concentration and the environment
  * @param temperature the constant temperature in K when the case gives one, else NaN
  * @param exposure the exposure history, when the case gives one
+ * @param quantities the declared concentration unit and species
+ * @param thresholds the levels whose first crossings the results report
  */
 public record CaseSpec(
     Path caseFile,
@@ -43,7 +46,9 @@ public record CaseSpec(
     Map<String, SourcePlace> places,
     SorptionLaw law,
     double temperature,
-    Optional<ExposureHistory> exposure) {
+    Optional<ExposureHistory> exposure,
+    Quantities quantities,
+    List<ThresholdSpec> thresholds) {
   public CaseSpec {
     Objects.requireNonNull(caseFile, "caseFile");
     Objects.requireNonNull(mesh, "mesh");
@@ -57,6 +62,8 @@ public record CaseSpec(
     places = ordered(places);
     Objects.requireNonNull(law, "law");
     Objects.requireNonNull(exposure, "exposure");
+    Objects.requireNonNull(quantities, "quantities");
+    thresholds = List.copyOf(thresholds);
   }
 
   /** The temperature over time: the exposure's, the constant one, or 20 °C. */
@@ -87,7 +94,29 @@ public record CaseSpec(
         places,
         law,
         temperature,
-        newExposure);
+        newExposure,
+        quantities,
+        thresholds);
+  }
+
+  /** The same case with its mesh read from another file (a result folder's copy). */
+  public CaseSpec withMesh(Path newMesh) {
+    return new CaseSpec(
+        caseFile,
+        newMesh,
+        elements,
+        materials,
+        faces,
+        initial,
+        time,
+        probes,
+        threshold,
+        places,
+        law,
+        temperature,
+        exposure,
+        quantities,
+        thresholds);
   }
 
   /** Where the value at {@code path} stands, or line 0 when the file does not hold the path. */

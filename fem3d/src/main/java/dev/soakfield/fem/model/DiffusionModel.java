@@ -197,6 +197,28 @@ public final class DiffusionModel {
     return false;
   }
 
+  /** Per material (volume group), the solve's concentration per unit of the case's. */
+  public double[] concentrationScales() {
+    double[] f = new double[materials.size()];
+    for (int m = 0; m < f.length; m++) {
+      f[m] = materials.get(m).concentrationScale();
+    }
+    return f;
+  }
+
+  /**
+   * The solubility that gives concentrations in the case's declared unit: {@code tetS} (the
+   * solve's, amount per m³ per potential) over each material's concentration scale. Amounts use
+   * {@code tetS} itself.
+   */
+  public double[] declaredSolubility(double[] tetS) {
+    double[] out = new double[tetS.length];
+    for (int t = 0; t < out.length; t++) {
+      out[t] = tetS[t] / materials.get(tetMaterial[t]).concentrationScale();
+    }
+    return out;
+  }
+
   /** S per tetrahedron at a temperature (a new array). */
   public double[] solubilityAt(double kelvin) {
     double tRef = referenceTemperature();

@@ -13,12 +13,28 @@ import java.util.Objects;
  * @param solubilityEnergy heat of solution ΔH of S = S0·exp(−ΔH/(R·T)), J/mol (0: constant)
  * @param diffusivityEnergy activation energy Q of D = D0·exp(−Q/(R·T)), J/mol (0: constant)
  * @param laws source laws acting in the material, summed
+ * @param concentrationScale f in c_solve = f·c_declared: the solve's amount per m³ per unit of the
+ *     case's concentration in this material (its density for mass fractions; 1 for volumetric
+ *     units)
  */
 public record MaterialBehaviour(
-    String name, double solubilityEnergy, double diffusivityEnergy, List<LawUse> laws) {
+    String name,
+    double solubilityEnergy,
+    double diffusivityEnergy,
+    List<LawUse> laws,
+    double concentrationScale) {
   public MaterialBehaviour {
     Objects.requireNonNull(name, "name");
     laws = List.copyOf(laws);
+    if (!(concentrationScale > 0) || Double.isInfinite(concentrationScale)) {
+      throw new IllegalArgumentException("concentration scale must be positive and finite");
+    }
+  }
+
+  /** A material whose concentrations are solved in the unit the case states them in. */
+  public MaterialBehaviour(
+      String name, double solubilityEnergy, double diffusivityEnergy, List<LawUse> laws) {
+    this(name, solubilityEnergy, diffusivityEnergy, laws, 1.0);
   }
 
   /** A material whose coefficients do not depend on temperature and that has no source law. */

@@ -48,6 +48,7 @@ public final class ModelBuilder {
     int groups = mesh.volumeGroups().size();
     MaterialSpec[] byGroup = new MaterialSpec[groups];
     List<MaterialBehaviour> behaviours = new ArrayList<>();
+    double[] scale = ConcentrationScales.of(spec, mesh);
     String caseName = String.valueOf(spec.caseFile().getFileName());
     for (int g = 0; g < groups; g++) {
       String name = mesh.volumeGroups().get(g).name();
@@ -58,7 +59,7 @@ public final class ModelBuilder {
       }
       behaviours.add(
           new MaterialBehaviour(
-              name, byGroup[g].solubilityEnergy(), byGroup[g].diffusivityEnergy(), uses));
+              name, byGroup[g].solubilityEnergy(), byGroup[g].diffusivityEnergy(), uses, scale[g]));
     }
     double[] solubility = new double[tets];
     double[] meanD = new double[tets];
@@ -70,7 +71,7 @@ public final class ModelBuilder {
       int g = mesh.tetGroup(t);
       tetMaterial[t] = g;
       MaterialSpec m = byGroup[g];
-      double s = new Arrhenius(m.solubility(), m.solubilityEnergy()).at(tRef);
+      double s = scale[g] * new Arrhenius(m.solubility(), m.solubilityEnergy()).at(tRef);
       double dFactor = new Arrhenius(1.0, m.diffusivityEnergy()).at(tRef);
       solubility[t] = s;
       double[] d = m.diffusivity().tensor();
@@ -91,6 +92,7 @@ public final class ModelBuilder {
             : Optional.empty();
     int[] owner = FaceOwners.of(mesh);
     warnings.addAll(NearSurfaceCheck.warnings(spec, mesh, owner, meanD));
+    warnings.addAll(ConcentrationScales.warnings(spec));
     List<FaceCondition> faces = new ArrayList<>();
     for (FaceSpec f : spec.faces().values()) {
       if (f.kind() == FaceKind.SEALED) {
@@ -99,8 +101,10 @@ public final class ModelBuilder {
       int g = mesh.faceGroupIndex(f.faceGroup());
       int[] members = FaceGroupMembers.of(mesh, g);
       double[] faceS = new double[members.length];
+      double[] faceScale = new double[members.length];
       for (int i = 0; i < members.length; i++) {
         faceS[i] = solubility[owner[members[i]]];
+        faceScale[i] = scale[mesh.tetGroup(owner[members[i]])];
       }
       double lo = Arrays.stream(faceS).min().orElse(1);
       double hi = Arrays.stream(faceS).max().orElse(1);
@@ -111,7 +115,12 @@ public final class ModelBuilder {
                 + "' touches materials of different solubility; where they meet, the prescribed"
                 + " concentration is applied in the material of smaller solubility");
       }
-      TimeFunction value = f.ambientValue() ? ambient.orElseThrow() : f.value();
+      TimeFunction value =
+          f.ambientValue()
+              ? ambient.orElseThrow()
+              : f.kind() == FaceKind.FLUX
+                  ? f.value()
+                  : ConcentrationScales.faceValue(spec, f, f.value(), faceScale);
       faces.add(
           new FaceCondition(
               g,
@@ -130,7 +139,7 @@ public final class ModelBuilder {
     double[] phi0 =
         spec.initial().from().isPresent()
             ? RestartState.potential(spec, mesh, space, solubility, warnings)
-            : initialPotential(spec, mesh, solubility);
+            : initialPotential(spec, mesh, solubility, scale);
     return new DiffusionModel(
         space,
         solubility,
@@ -145,11 +154,13 @@ public final class ModelBuilder {
         spec.law());
   }
 
-  private static double[] initialPotential(CaseSpec spec, TetMesh mesh, double[] solubility) {
+  private static double[] initialPotential(
+      CaseSpec spec, TetMesh mesh, double[] solubility, double[] scale) {
     double[] phi0 = new double[mesh.nodeCount()];
     double[] nodeS = new double[mesh.nodeCount()];
     for (int t = 0; t < mesh.tetCount(); t++) {
-      double c0 = spec.initial().valueFor(mesh.volumeGroups().get(mesh.tetGroup(t)).name());
+      int g = mesh.tetGroup(t);
+      double c0 = scale[g] * spec.initial().valueFor(mesh.volumeGroups().get(g).name());
       for (int k = 0; k < mesh.nodesPerTet(); k++) {
         int v = mesh.tetNode(t, k);
         // an interface node takes the potential of the side with the larger solubility

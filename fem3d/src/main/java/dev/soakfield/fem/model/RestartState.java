@@ -12,6 +12,7 @@ import dev.soakfield.fem.casefile.SourcePlace;
 import dev.soakfield.fem.physics.Arrhenius;
 import dev.soakfield.fem.results.ResultFiles;
 import dev.soakfield.fem.results.StateFile;
+import dev.soakfield.fem.units.ConcentrationUnit;
 import dev.soakfield.mesh.TetMesh;
 import java.nio.file.Path;
 import java.util.Arrays;
@@ -40,6 +41,21 @@ final class RestartState {
     CaseSpec earlier = earlierCase(spec, folder);
     double endTemperature = earlier.temperatureHistory().at(state.time());
     double startTemperature = spec.temperatureHistory().at(0);
+    String amountBefore = earlier.quantities().amount();
+    String amountNow = spec.quantities().amount();
+    boolean undeclared =
+        earlier.quantities().unit() == ConcentrationUnit.UNDECLARED
+            || spec.quantities().unit() == ConcentrationUnit.UNDECLARED;
+    if (!undeclared && !amountBefore.equals(amountNow)) {
+      throw problem(
+          spec,
+          "found an earlier run that counts its amount in "
+              + amountBefore
+              + ", expected one in "
+              + amountNow
+              + " as this case's units give (declare the same units.concentration kind)");
+    }
+    double[] earlierScale = ConcentrationScales.of(earlier, mesh);
     double[] endSolubility = new double[mesh.tetCount()];
     for (int t = 0; t < endSolubility.length; t++) {
       String part = mesh.volumeGroups().get(mesh.tetGroup(t)).name();
@@ -47,7 +63,9 @@ final class RestartState {
       if (m == null) {
         throw problem(spec, "found an earlier run without a material for part '" + part + "'");
       }
-      endSolubility[t] = new Arrhenius(m.solubility(), m.solubilityEnergy()).at(endTemperature);
+      endSolubility[t] =
+          earlierScale[mesh.tetGroup(t)]
+              * new Arrhenius(m.solubility(), m.solubilityEnergy()).at(endTemperature);
     }
     SystemAssembler asm = new SystemAssembler(space);
     double[] before = rowSums(asm, endSolubility, lumped(earlier));

@@ -11,6 +11,7 @@ public final class GroupMonitor {
   private final SystemAssembler assembler;
   private final double[] solubilityPerTet;
   private final double[] groupSolubility;
+  private final double[] concentrationScale;
   private final int[][] groupNodes;
   private final int[][] freeNodes;
   private final double threshold;
@@ -30,7 +31,31 @@ public final class GroupMonitor {
       double threshold,
       double[] phi0,
       boolean[] prescribed) {
+    this(
+        assembler,
+        solubilityPerTet,
+        ones(assembler.space().mesh().volumeGroups().size()),
+        threshold,
+        phi0,
+        prescribed);
+  }
+
+  /**
+   * A monitor whose amounts are in the solve's unit and whose maxima are in the case's declared
+   * unit.
+   *
+   * @param concentrationScale per group, the solve's concentration per declared unit (maxima are
+   *     divided by it)
+   */
+  public GroupMonitor(
+      SystemAssembler assembler,
+      double[] solubilityPerTet,
+      double[] concentrationScale,
+      double threshold,
+      double[] phi0,
+      boolean[] prescribed) {
     this.assembler = assembler;
+    this.concentrationScale = concentrationScale.clone();
     this.solubilityPerTet = solubilityPerTet.clone();
     TetMesh mesh = assembler.space().mesh();
     int groups = mesh.volumeGroups().size();
@@ -112,9 +137,20 @@ public final class GroupMonitor {
       for (int v : nodesOf[g]) {
         best = Math.max(best, phi[v]);
       }
-      m[g] = groupSolubility[g] * best;
+      m[g] = groupSolubility[g] / concentrationScale[g] * best;
     }
     return m;
+  }
+
+  /** Largest nodal c per volume group over the nodes no face holds at its value. */
+  public double[] freeMaxima(double[] phi) {
+    return maxima(phi, freeNodes);
+  }
+
+  private static double[] ones(int n) {
+    double[] a = new double[n];
+    java.util.Arrays.fill(a, 1.0);
+    return a;
   }
 
   /** Records the step ending at t; returns the maxima at t. */

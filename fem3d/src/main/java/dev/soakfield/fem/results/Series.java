@@ -185,18 +185,9 @@ public final class Series {
     return m;
   }
 
-  /** The column name with its unit; columns this version does not know keep their name. */
+  /** The column name with its unit, for a run that declared no units. */
   public static String withUnit(String name) {
-    String base = name.contains(":") ? name.substring(0, name.indexOf(':') + 1) : name;
-    String unit =
-        switch (base) {
-          case "time" -> "s";
-          case "amount", "amount:", "inflow:", "balance_error" -> "c*m^3";
-          case "max:", "probe:" -> "c";
-          case "inflow_rate:" -> "c*m^3/s";
-          default -> "";
-        };
-    return unit.isEmpty() ? name : name + " [" + unit + "]";
+    return ResultUnits.UNDECLARED.label(name);
   }
 
   /**
@@ -205,12 +196,21 @@ public final class Series {
    * @throws ResultFolderException when a cell of the series is no number (line and column)
    */
   public static int copyWithUnits(Path series, Path csv) throws IOException {
+    return copyWithUnits(series, csv, ResultUnits.UNDECLARED);
+  }
+
+  /**
+   * Copies series.csv to {@code csv} with each column's unit (in {@code units}) in its header.
+   *
+   * @throws ResultFolderException when a cell of the series is no number (line and column)
+   */
+  public static int copyWithUnits(Path series, Path csv, ResultUnits units) throws IOException {
     Series.read(series); // a bad cell is refused here, with its line and column, before writing
     List<String> lines = Files.readAllLines(series, StandardCharsets.UTF_8);
     List<String> header = Series.split(lines.get(0));
     List<String> named = new ArrayList<>();
     for (String h : header) {
-      String u = withUnit(h);
+      String u = units.label(h);
       named.add(u.contains(",") || u.contains("\"") ? "\"" + u.replace("\"", "\"\"") + "\"" : u);
     }
     AtomicFiles.write(

@@ -168,6 +168,11 @@ public final class StoredRun {
     return series;
   }
 
+  /** The units the run's outputs are in (c and c*m^3 when its case declared none). */
+  public ResultUnits units() {
+    return summary.map(ResultUnits::of).orElse(ResultUnits.UNDECLARED);
+  }
+
   /** The threshold of the run, if it had one. */
   public Optional<Double> threshold() {
     return summary

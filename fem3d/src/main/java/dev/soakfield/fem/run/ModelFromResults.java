@@ -52,21 +52,7 @@ public record ModelFromResults(
       throw new ResultFolderException(
           folder + ": its case copy no longer reads: " + e.getMessage());
     }
-    CaseSpec spec =
-        new CaseSpec(
-            read.caseFile(),
-            meshCopy,
-            read.elements(),
-            read.materials(),
-            read.faces(),
-            read.initial(),
-            read.time(),
-            read.probes(),
-            read.threshold(),
-            read.places(),
-            read.law(),
-            read.temperature(),
-            read.exposure());
+    CaseSpec spec = read.withMesh(meshCopy);
     TetMesh mesh = MeshLoader.load(meshCopy, AssemblyOptions.defaults()).mesh();
     DiffusionModel model = ModelBuilder.build(spec, mesh, new ArrayList<>());
     boolean lumped = spec.time().capacity() == CapacityForm.LUMPED;

@@ -52,7 +52,11 @@ final class RunRecorder implements StepListener, AutoCloseable {
   private final StopRule stop;
   private final double[] partAmounts0;
   private final double end;
+  private final ThresholdWatch watch;
+  private final double[] partVolume;
+  private final double[] scales;
   private double[] tetS;
+  private double[] shownS;
   private double[] nodalS;
   private double temperatureNow;
   private double[] lastMaxima;
@@ -97,12 +101,14 @@ final class RunRecorder implements StepListener, AutoCloseable {
     double threshold = spec.threshold().orElse(Double.NaN);
     temperatureNow = model.referenceTemperature();
     tetS = model.solubility();
-    parts = new GroupMonitor(asm, tetS, threshold, phi0, stepper.prescribedNodes());
-    nodalS = NodalSolubility.of(mesh, tetS);
+    shownS = model.declaredSolubility(tetS);
+    scales = model.concentrationScales();
+    parts = new GroupMonitor(asm, tetS, scales, threshold, phi0, stepper.prescribedNodes());
+    nodalS = NodalSolubility.of(mesh, shownS);
     clock = new ThresholdClock(spec.threshold().orElse(Double.POSITIVE_INFINITY), nodalS, phi0);
     probes =
         new ProbeWatch(
-            spec.probes(), new PointLocator(model.space()), threshold, tetS, phi0, warnings);
+            spec.probes(), new PointLocator(model.space()), threshold, shownS, phi0, warnings);
     double[] ones = new double[mesh.tetCount()];
     Arrays.fill(ones, 1.0);
     double[] nodalOnes = new double[mesh.nodeCount()];
@@ -118,7 +124,10 @@ final class RunRecorder implements StepListener, AutoCloseable {
             spec.probes(),
             stepper.hasSourceLaws(),
             asm.integratePerGroup(nodalOnes, ones),
-            partDensity);
+            partDensity,
+            spec.quantities().massPerAmount().orElse(Double.NaN));
+    partVolume = asm.integratePerGroup(nodalOnes, ones);
+    watch = new ThresholdWatch(spec.thresholds(), mesh, spec.probes());
     // the amount before prescribed faces are raised
     balance = new BalanceLedger(mesh.faceGroups().size(), stepper.amount(model.initialPhi(), 0.0));
     partAmounts0 = totalAmounts(model.initialPhi(), 0.0);
@@ -140,6 +149,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
       double[] raised = initial.faceInflow();
       balance.start(raised, initial.amount());
       lastMaxima = parts.maxima(initial.phi());
+      watch.start(reading(0.0, initial.phi()));
       series.row(rows.row(figures(0.0, 0.0, initial.phi(), raised, lastMaxima)));
       writeFrame(0.0, initial.phi());
     } catch (IOException e) {
@@ -158,7 +168,8 @@ final class RunRecorder implements StepListener, AutoCloseable {
       lastMaxima = maxima;
       lastTime = t;
       clock.step(t, dt, phi);
-      probes.step(t, dt, phi, tetS);
+      probes.step(t, dt, phi, shownS);
+      watch.step(reading(t, phi));
       series.row(rows.row(figures(t, dt, phi, inflow, maxima)));
       if (output) {
         writeFrame(t, phi);
@@ -180,9 +191,17 @@ final class RunRecorder implements StepListener, AutoCloseable {
         maxima,
         stepInflow,
         balance,
-        probes.values(phi, tetS),
+        probes.values(phi, shownS),
         temperatureNow,
         stepper.hasSourceLaws() ? stepper.trappedPerGroup(t) : new double[0]);
+  }
+
+  private ThresholdWatch.Reading reading(double t, double[] phi) {
+    double[] means = totalAmounts(phi, t);
+    for (int g = 0; g < means.length; g++) {
+      means[g] /= partVolume[g] * scales[g];
+    }
+    return new ThresholdWatch.Reading(t, parts.freeMaxima(phi), means, probes.values(phi, shownS));
   }
 
   double balanceRelative() {
@@ -218,6 +237,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     double[][] c = clock.snapshot();
     b.put("rec.clock.first", c[0]).put("rec.clock.previous", c[1]);
     probes.snapshot(b);
+    watch.snapshot(b);
     if (lastMaxima != null) {
       b.put("rec.last.maxima", lastMaxima);
     }
@@ -234,6 +254,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     parts.restore(new double[][] {b.get("rec.group.first"), b.get("rec.group.max")});
     clock.restore(new double[][] {b.get("rec.clock.first"), b.get("rec.clock.previous")});
     probes.restore(b);
+    watch.restore(b);
     lastMaxima = b.has("rec.last.maxima") ? b.get("rec.last.maxima") : null;
     frames.restore(b);
   }
@@ -259,7 +280,8 @@ final class RunRecorder implements StepListener, AutoCloseable {
     temperatureNow = kelvin;
     if (model.coefficientsVary()) {
       tetS = model.solubilityAt(kelvin);
-      nodalS = NodalSolubility.of(mesh, tetS);
+      shownS = model.declaredSolubility(tetS);
+      nodalS = NodalSolubility.of(mesh, shownS);
       parts.updateSolubility(tetS);
       clock.updateSolubility(nodalS);
     }
@@ -292,7 +314,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     SummaryFile.write(
         dir,
         SummaryContents.of(
-            spec, model, totals, balance, parts.firstTimes(), probes, stop, warnings));
+            spec, model, totals, balance, parts.firstTimes(), probes, stop, warnings, watch));
   }
 
   @Override

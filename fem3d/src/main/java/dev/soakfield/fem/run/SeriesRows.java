@@ -20,6 +20,7 @@ final class SeriesRows {
   private final int[] exteriorGroups;
   private final double[] partVolume;
   private final double[] partDensity; // NaN where a material gives none
+  private final double massPerAmount; // kg per unit of amount; NaN when the species is unknown
 
   /**
    * What one row is made of.
@@ -45,8 +46,10 @@ final class SeriesRows {
       List<ProbeSpec> probes,
       boolean sourceLaws,
       double[] partVolume,
-      double[] partDensity) {
+      double[] partDensity,
+      double massPerAmount) {
     this.mesh = mesh;
+    this.massPerAmount = massPerAmount;
     this.probes = probes;
     this.sourceLaws = sourceLaws;
     this.partVolume = partVolume;
@@ -139,9 +142,9 @@ final class SeriesRows {
         gained += amounts[g] - start[g];
         mass += partDensity[g] * partVolume[g];
       }
-      r.add(100 * gained / mass);
+      r.add(100 * gained * massPerAmount / mass);
       for (int g = 0; g < amounts.length; g++) {
-        r.add(100 * (amounts[g] - start[g]) / (partDensity[g] * partVolume[g]));
+        r.add(100 * (amounts[g] - start[g]) * massPerAmount / (partDensity[g] * partVolume[g]));
       }
     }
     return r.stream().mapToDouble(Double::doubleValue).toArray();
@@ -153,6 +156,6 @@ final class SeriesRows {
         return false;
       }
     }
-    return partDensity.length > 0;
+    return partDensity.length > 0 && !Double.isNaN(massPerAmount);
   }
 }

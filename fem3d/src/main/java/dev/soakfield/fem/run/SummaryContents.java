@@ -24,7 +24,8 @@ final class SummaryContents {
       double[] partFirstTimes,
       ProbeWatch probes,
       StopRule stop,
-      List<String> warnings) {
+      List<String> warnings,
+      ThresholdWatch thresholds) {
     TetMesh mesh = model.space().mesh();
     Map<String, Object> root = new LinkedHashMap<>();
     root.put("case", spec.caseFile().toString());
@@ -71,6 +72,10 @@ final class SummaryContents {
       s.put("time", Double.isNaN(at) ? null : at);
       root.put("stop", s);
     }
+    if (!spec.thresholds().isEmpty()) {
+      root.put("thresholds", thresholds.summary(spec.quantities().concentration()));
+    }
+    root.put("units", spec.quantities().describe());
     root.put("law", model.law().word());
     root.put("temperature_start", model.referenceTemperature());
     root.put("warnings", warnings);

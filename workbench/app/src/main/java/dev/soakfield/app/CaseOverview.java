@@ -11,7 +11,9 @@ import dev.soakfield.fem.casefile.TimeTable;
 import dev.soakfield.fem.run.MemoryEstimate;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunTimeEstimate;
+import dev.soakfield.fem.units.ConcentrationUnit;
 import dev.soakfield.fem.units.DurationText;
+import dev.soakfield.fem.units.Quantities;
 import dev.soakfield.mesh.FaceGroup;
 import dev.soakfield.mesh.FaceGroupKind;
 import dev.soakfield.mesh.TetMesh;
@@ -47,6 +49,7 @@ public final class CaseOverview {
             mesh.tetCount(),
             mesh.order() == 2 ? "quadratic" : "linear",
             mesh.nodesPerTet()));
+    sb.append(units(c));
     sb.append("materials:\n");
     for (MaterialSpec m : c.materials().values()) {
       if (m.impermeable()) {
@@ -80,7 +83,7 @@ public final class CaseOverview {
       String where = g.kind() == FaceGroupKind.EXTERIOR ? "exterior" : "interface";
       String what;
       if (f != null) {
-        what = faceKind(f);
+        what = faceKind(f, c.quantities());
       } else if (g.kind() == FaceGroupKind.EXTERIOR) {
         what = "sealed (no entry in faces: sealed by default)";
         unassigned.add(g.name());
@@ -154,15 +157,34 @@ public final class CaseOverview {
         c.time().capacity().word());
   }
 
-  private static String faceKind(FaceSpec f) {
+  /** The line that says what the case's numbers are in and how amounts are weighed. */
+  private static String units(CaseSpec c) {
+    Quantities q = c.quantities();
+    if (q.unit() == ConcentrationUnit.UNDECLARED) {
+      return "units: concentration not declared (\"units\": {\"concentration\": ...});"
+          + " amounts are concentration × m³\n";
+    }
+    return "units: concentrations in "
+        + q.concentration()
+        + ", amounts in "
+        + q.amount()
+        + q.species()
+            .map(s -> ", species " + s.name() + " (" + num(s.molarMass() * 1e3) + " g/mol)")
+            .orElse("")
+        + "\n";
+  }
+
+  private static String faceKind(FaceSpec f, Quantities q) {
     String value = table(f.value());
+    String c = q.unit() == ConcentrationUnit.UNDECLARED ? "" : " " + q.concentration();
+    String flux = q.unit() == ConcentrationUnit.UNDECLARED ? "amount/(m²·s)" : q.flux();
     return switch (f.kind()) {
       case SEALED -> "sealed";
-      case CONCENTRATION -> "concentration " + value;
-      case FLUX -> "flux " + value + " amount/(m²·s)";
+      case CONCENTRATION -> "concentration " + value + c;
+      case FLUX -> "flux " + value + " " + flux;
       case EXCHANGE ->
           "exchange with environment "
-              + (f.ambientValue() ? "ambient" : value)
+              + (f.ambientValue() ? "ambient" : value + c)
               + ", coefficient "
               + table(f.coefficient())
               + " m/s";

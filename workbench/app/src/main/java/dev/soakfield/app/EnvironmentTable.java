@@ -7,6 +7,7 @@ import dev.soakfield.fem.physics.Arrhenius;
 import dev.soakfield.fem.physics.ExposureHistory;
 import dev.soakfield.fem.physics.SorptionLaw;
 import dev.soakfield.fem.physics.TimeFunction;
+import dev.soakfield.fem.units.ConcentrationUnit;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
@@ -59,10 +60,14 @@ final class EnvironmentTable {
   }
 
   private static void parts(StringBuilder sb, CaseSpec c, double kelvin, Optional<Double> phi) {
+    String cUnit =
+        c.quantities().unit() == ConcentrationUnit.UNDECLARED
+            ? "amount/m³"
+            : c.quantities().concentration();
     String sUnit =
         switch (c.law()) {
-          case HENRY -> " (amount/m³)/Pa";
-          case SIEVERTS -> " (amount/m³)/√Pa";
+          case HENRY -> " (" + cUnit + ")/Pa";
+          case SIEVERTS -> " (" + cUnit + ")/√Pa";
           case PLAIN -> "";
         };
     for (MaterialSpec m : c.materials().values()) {
@@ -83,7 +88,7 @@ final class EnvironmentTable {
               s,
               sUnit));
       phi.ifPresent(
-          p -> sb.append(String.format(Locale.ROOT, ", saturation c = %.4g amount/m³", s * p)));
+          p -> sb.append(String.format(Locale.ROOT, ", saturation c = %.4g %s", s * p, cUnit)));
       sb.append('\n');
     }
   }

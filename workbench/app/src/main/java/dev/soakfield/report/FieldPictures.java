@@ -14,7 +14,10 @@ import java.nio.file.Path;
 import java.util.Optional;
 
 /**
- * Pictures of the final field for the run report, drawn by the picture service (the renderer of
+ * Pictures of the field for the run report, at the last output and at the output where the field's
+ * spread is widest (after a long soak the last one is often a single colour). Spread is the
+ * standard deviation over the nodes: the range would pick the start of every step change, where
+ * only the held faces' nodes differ from the rest, drawn by the picture service (the renderer of
  * {@code soakfield render}) into {@link ReportWriter#PICTURES}. Where there is no renderer (the
  * headless build) or no OpenGL the report goes without them; the run's results are complete either
  * way.
@@ -42,9 +45,19 @@ public final class FieldPictures {
       ViewSettings.Plane mid = ViewSettings.Plane.parse("z:" + 0.5 * (b[2] + b[5]));
       Path folder = results.resolve(ReportWriter.PICTURES);
       Files.createDirectories(folder);
-      draw(maker.get(), study, r.get(), Optional.empty(), folder.resolve("field-c-end.png"));
-      draw(
-          maker.get(), study, r.get(), Optional.of(mid), folder.resolve("field-c-end-section.png"));
+      int last = r.get().frameCount() - 1;
+      int widest = widestSpread(r.get());
+      for (int frame : widest == last ? new int[] {last} : new int[] {widest, last}) {
+        String name = frame == last ? "field-c-end" : "field-c-widest-spread";
+        draw(maker.get(), study, r.get(), frame, Optional.empty(), folder.resolve(name + ".png"));
+        draw(
+            maker.get(),
+            study,
+            r.get(),
+            frame,
+            Optional.of(mid),
+            folder.resolve(name + "-section.png"));
+      }
       return Optional.empty();
     } catch (IOException | RuntimeException | LinkageError e) {
       return Optional.of(String.valueOf(e.getMessage()));
@@ -55,14 +68,48 @@ public final class FieldPictures {
       PictureMaker maker,
       Study study,
       StoredRun results,
+      int frame,
       Optional<ViewSettings.Plane> section,
       Path file)
       throws IOException {
     ViewSettings settings = new ViewSettings();
     settings.field(Optional.of(FieldKind.CONCENTRATION));
-    settings.frame(results.frameCount() - 1);
+    settings.frame(frame);
     settings.section(section);
     ViewPicture.write(
-        maker, study, settings, OrbitCamera.View.ISO, WIDTH, HEIGHT, "amount/m^3", file);
+        maker,
+        study,
+        settings,
+        OrbitCamera.View.ISO,
+        WIDTH,
+        HEIGHT,
+        results.units().concentration(),
+        file);
+  }
+
+  /** The frame whose concentration has the largest standard deviation over the nodes. */
+  static int widestSpread(StoredRun results) {
+    int best = results.frameCount() - 1;
+    double widest = Double.NEGATIVE_INFINITY;
+    for (int f = results.frameCount() - 1; f >= 0; f--) {
+      double sd = standardDeviation(results.field(f, FieldKind.CONCENTRATION.fileName));
+      if (sd > widest) { // on a tie the later frame stays
+        widest = sd;
+        best = f;
+      }
+    }
+    return best;
+  }
+
+  private static double standardDeviation(double[] v) {
+    double mean = 0;
+    for (double x : v) {
+      mean += x / v.length;
+    }
+    double sum = 0;
+    for (double x : v) {
+      sum += (x - mean) * (x - mean);
+    }
+    return Math.sqrt(sum / v.length);
   }
 }

@@ -3,6 +3,7 @@ package dev.soakfield.report;
 import com.fasterxml.jackson.databind.JsonNode;
 import dev.soakfield.fem.results.ResultFiles;
 import dev.soakfield.fem.results.ResultFolderException;
+import dev.soakfield.fem.results.ResultUnits;
 import dev.soakfield.fem.results.RunManifest;
 import dev.soakfield.fem.results.Series;
 import dev.soakfield.fem.results.SummaryFile;
@@ -103,18 +104,20 @@ public final class ReportWriter {
       end = series.get().last("time");
     }
     TimeAxis axis = TimeAxis.forEnd(Double.isNaN(end) ? 1 : end);
+    ResultUnits units = ResultUnits.of(summary);
 
     ReportDocument doc = new ReportDocument("Soakfield run: " + fileName(manifest.caseFile()));
     run(doc, manifest);
-    caseSummary(doc, kase, series);
+    caseSummary(doc, kase, series, units);
     if (series.isPresent()) {
-      curves(doc, series.get(), axis);
-      groupTables(doc, series.get(), axis);
+      curves(doc, series.get(), axis, units);
+      WeightGainSection.write(doc, series.get(), axis);
+      groupTables(doc, series.get(), axis, units);
     } else {
       doc.heading("Curves").paragraph("No series.csv in the folder: the run wrote no steps.");
     }
-    threshold(doc, summary);
-    figures(doc, summary, series);
+    ThresholdSection.write(doc, summary, units.concentration());
+    figures(doc, summary, series, units);
     warnings(doc, manifest, summary);
     pictures(doc, folder);
     doc.heading("Cautions");
@@ -140,7 +143,8 @@ public final class ReportWriter {
     }
   }
 
-  private static void caseSummary(ReportDocument doc, JsonNode kase, Optional<Series> series) {
+  private static void caseSummary(
+      ReportDocument doc, JsonNode kase, Optional<Series> series, ResultUnits units) {
     doc.heading("Case");
     if (kase.isMissingNode()) {
       doc.paragraph("No readable case copy (case.json) in the folder.");
@@ -182,6 +186,12 @@ public final class ReportWriter {
       doc.preformatted(kase.get("exposure").toPrettyString());
     }
     List<String> other = new ArrayList<>();
+    other.add(
+        "units: concentrations in "
+            + units.concentration()
+            + ", amounts in "
+            + units.amount()
+            + (kase.has("species") ? " (species " + text(kase.get("species")) + ")" : ""));
     for (String key : List.of("law", "temperature", "initial", "time", "threshold", "elements")) {
       if (kase.has(key)) {
         other.add(key + ": " + text(kase.get(key)));
@@ -190,11 +200,12 @@ public final class ReportWriter {
     doc.bullets(other);
   }
 
-  private static void curves(ReportDocument doc, Series s, TimeAxis axis) throws IOException {
+  private static void curves(ReportDocument doc, Series s, TimeAxis axis, ResultUnits units)
+      throws IOException {
     double[] t = s.column("time").orElse(new double[s.rows()]);
     doc.heading("Uptake");
     SeriesPlot uptake =
-        new SeriesPlot("Amount in the part", "amount (concentration × m³)", axis).time(t);
+        new SeriesPlot("Amount in the part", "amount [" + units.amount() + "]", axis).time(t);
     s.column("amount").ifPresent(a -> uptake.line("total", a));
     for (String g : s.suffixes("amount:")) {
       uptake.line(g, s.column("amount:" + g).orElseThrow());
@@ -206,7 +217,11 @@ public final class ReportWriter {
     if (!probes.isEmpty()) {
       doc.heading("Probes");
       SeriesPlot plot =
-          new SeriesPlot("Concentration at the probes", "concentration", axis).time(t);
+          new SeriesPlot(
+                  "Concentration at the probes",
+                  "concentration [" + units.concentration() + "]",
+                  axis)
+              .time(t);
       for (String p : probes) {
         plot.line(p, s.column("probe:" + p).orElseThrow());
       }
@@ -218,7 +233,8 @@ public final class ReportWriter {
     }
   }
 
-  private static void groupTables(ReportDocument doc, Series s, TimeAxis axis) throws IOException {
+  private static void groupTables(ReportDocument doc, Series s, TimeAxis axis, ResultUnits units)
+      throws IOException {
     doc.heading("Amount per volume group");
     doc.paragraph("At the last recorded time, t = " + DurationText.of(s.last("time")) + ":");
     List<List<String>> rows = new ArrayList<>();
@@ -228,14 +244,19 @@ public final class ReportWriter {
     }
     rows.add(List.of("all", num(s.last("amount")), "", ""));
     doc.table(
-        List.of("volume group", "amount", "max. concentration now", "max. concentration in run"),
+        List.of(
+            "volume group",
+            "amount [" + units.amount() + "]",
+            "max. concentration now [" + units.concentration() + "]",
+            "max. concentration in run [" + units.concentration() + "]"),
         rows);
     List<String> faces = s.suffixes("inflow:");
     if (!faces.isEmpty()) {
       doc.heading("Inflow per face group");
       double[] t = s.column("time").orElse(new double[s.rows()]);
       SeriesPlot plot =
-          new SeriesPlot("Cumulative inflow per face group", "amount (concentration × m³)", axis)
+          new SeriesPlot(
+                  "Cumulative inflow per face group", "amount [" + units.amount() + "]", axis)
               .time(t);
       for (String g : faces) {
         plot.line(g, s.column("inflow:" + g).orElseThrow());
@@ -247,40 +268,17 @@ public final class ReportWriter {
       for (String g : faces) {
         f.add(List.of(g, num(s.last("inflow:" + g)), num(s.last("inflow_rate:" + g))));
       }
-      doc.table(List.of("face group", "cumulative inflow", "inflow rate at the end (/s)"), f);
+      doc.table(
+          List.of(
+              "face group",
+              "cumulative inflow [" + units.amount() + "]",
+              "inflow rate at the end [" + units.amount() + "/s]"),
+          f);
     }
   }
 
-  private static void threshold(ReportDocument doc, JsonNode summary) {
-    JsonNode th = summary.path("threshold");
-    doc.heading("Time to threshold");
-    if (!th.isObject()) {
-      doc.paragraph("The case sets no threshold.");
-      return;
-    }
-    doc.paragraph(
-        "First time the concentration reaches "
-            + text(th.path("value"))
-            + ". For a part, the first node of it to get there; nodes on faces whose"
-            + " concentration the case sets are left out, since they hold the face's value from"
-            + " the start:");
-    List<List<String>> rows = new ArrayList<>();
-    for (String kind : List.of("volume_groups", "probes")) {
-      for (Map.Entry<String, JsonNode> e : th.path("first_time").path(kind).properties()) {
-        JsonNode v = e.getValue();
-        rows.add(
-            List.of(
-                kind.equals("probes") ? "probe" : "volume group",
-                e.getKey(),
-                v.isNumber()
-                    ? DurationText.of(v.asDouble()) + " (" + num(v.asDouble()) + " s)"
-                    : "not reached"));
-      }
-    }
-    doc.table(List.of("where", "name", "first time"), rows);
-  }
-
-  private static void figures(ReportDocument doc, JsonNode summary, Optional<Series> series) {
+  private static void figures(
+      ReportDocument doc, JsonNode summary, Optional<Series> series, ResultUnits units) {
     doc.heading("Mesh, solver and balance");
     if (summary.isMissingNode()) {
       doc.paragraph("No summary.json: the run did not finish.");
@@ -299,7 +297,7 @@ public final class ReportWriter {
     rows.add(List.of("end time", DurationText.of(solver.path("end_time").asDouble(Double.NaN))));
     rows.add(
         List.of(
-            "amount at start, before the faces take their values",
+            "amount at start, before the faces take their values [" + units.amount() + "]",
             num(balance.path("amount_start").asDouble(Double.NaN))));
     // the series' first row comes after held and ambient faces set their nodes: say both
     series
@@ -308,9 +306,14 @@ public final class ReportWriter {
             s ->
                 rows.add(
                     List.of(
-                        "amount at t = 0 with the faces' values (the first row of series.csv)",
+                        "amount at t = 0 with the faces' values (the first row of series.csv) ["
+                            + units.amount()
+                            + "]",
                         num(s.require("amount")[0]))));
-    rows.add(List.of("amount at end", num(balance.path("amount_end").asDouble(Double.NaN))));
+    rows.add(
+        List.of(
+            "amount at end [" + units.amount() + "]",
+            num(balance.path("amount_end").asDouble(Double.NaN))));
     rows.add(
         List.of(
             "balance error (amount change − inflow − sources)",

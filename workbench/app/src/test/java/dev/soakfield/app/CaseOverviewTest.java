@@ -66,7 +66,7 @@ class CaseOverviewTest {
     assertEquals(1.393e-4, s85, 1e-7);
     java.util.regex.Matcher m =
         java.util.regex.Pattern.compile(
-                "segment 1, 0 s to 7 d, 85.0 °C:\\n\\s+body\\s+D = ([0-9.e+-]+) m²/s, S = ([0-9.e+-]+) \\(amount/m³\\)/Pa, saturation c = ([0-9.e+-]+) amount/m³")
+                "segment 1, 0 s to 7 d, 85.0 °C:\\n\\s+body\\s+D = ([0-9.e+-]+) m²/s, S = ([0-9.e+-]+) \\(kg/m\\^3\\)/Pa, saturation c = ([0-9.e+-]+) kg/m\\^3")
             .matcher(text);
     assertTrue(m.find(), text);
     assertEquals(s85, Double.parseDouble(m.group(2)), 1e-3 * s85);
@@ -74,6 +74,11 @@ class CaseOverviewTest {
     // D = 4.7e-6 · exp(-42000 / (8.314462618 · 358.15)) (the Arrhenius law itself)
     assertEquals(
         4.7e-6 * Math.exp(-42000 / (8.314462618 * 358.15)), Double.parseDouble(m.group(1)), 1e-15);
+    // the sample declares its unit and species, and check says so
+    assertTrue(
+        text.contains(
+            "units: concentrations in kg/m^3, amounts in kg, species water (18.02 g/mol)"),
+        text);
     // the dry bake drives towards nothing
     assertTrue(text.contains("125.0 °C:"), text);
   }

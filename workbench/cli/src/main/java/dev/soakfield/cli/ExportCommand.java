@@ -2,6 +2,7 @@ package dev.soakfield.cli;
 
 import dev.soakfield.app.StepMatrixExport;
 import dev.soakfield.fem.results.ResultFiles;
+import dev.soakfield.fem.results.ResultUnits;
 import dev.soakfield.fem.results.Series;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -26,7 +27,8 @@ import picocli.CommandLine.Spec;
     mixinStandardHelpOptions = true,
     description = {
       "Exports from a result folder: --csv the series and probe data with units in the header"
-          + " (c is the concentration unit of the case: amounts are c*m^3); --mtx the matrix"
+          + " (in the units the case declared; c and c*m^3 where it declared none); --mtx the"
+          + " matrix"
           + " M + theta*dt*L(t1) of one step (prescribed rows and columns eliminated) in Matrix Market"
           + " coordinate format, rebuilt from the folder's case.json and mesh.msh."
     })
@@ -70,7 +72,7 @@ final class ExportCommand implements Callable<Integer> {
       if (time != null) {
         throw new UserInputException("--time: found with --csv, expected it only with --mtx");
       }
-      int rows = Series.copyWithUnits(series, target.csv);
+      int rows = Series.copyWithUnits(series, target.csv, ResultUnits.of(dir));
       out.printf(Locale.ROOT, "wrote %d rows to %s%n", rows, target.csv);
     } else {
       OptionalDouble at = time == null ? OptionalDouble.empty() : OptionalDouble.of(time);

@@ -85,9 +85,9 @@ final class RenderCommand implements Callable<Integer> {
 
   @Option(
       names = "--unit",
-      defaultValue = "amount/m^3",
       paramLabel = "TEXT",
-      description = "Unit of c and phi for the colour bar, e.g. kg/m3 (default: ${DEFAULT-VALUE}).")
+      description =
+          "Unit of c for the colour bar, e.g. kg/m3 (default: the unit the case declared).")
   String unit;
 
   @Option(
@@ -116,7 +116,11 @@ final class RenderCommand implements Callable<Integer> {
     }
     // the cut faces the viewer: the half of the part nearer the viewer is the one taken away
     settings.section(settings.section().map(p -> p.facing(OrbitCamera.towards(side))));
-    Scene scene = ViewPicture.write(pictures, study, settings, side, wh[0], wh[1], unit, out);
+    String barUnit =
+        unit != null
+            ? unit
+            : study.results().map(r -> r.units().concentration()).orElse("amount/m^3");
+    Scene scene = ViewPicture.write(pictures, study, settings, side, wh[0], wh[1], barUnit, out);
     PrintWriter o = spec.commandLine().getOut();
     o.println("picture: " + out + " (" + wh[0] + "x" + wh[1] + ")");
     study

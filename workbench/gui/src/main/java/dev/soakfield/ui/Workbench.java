@@ -72,6 +72,7 @@ public final class Workbench implements AutoCloseable {
   private void attach(Study study, boolean fit) {
     Optional<OrbitCamera> keep = Optional.ofNullable(model).map(WorkbenchModel::camera);
     model = new WorkbenchModel(study);
+    renderer.unit(study.results().map(r -> r.units().concentration()).orElse("amount/m^3"));
     layout.update(surface, model.camera());
     if (fit || keep.isEmpty()) {
       model.camera().fit(study.geometry().bounds());
