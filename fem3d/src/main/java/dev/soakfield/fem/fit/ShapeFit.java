@@ -16,9 +16,11 @@ import org.apache.commons.math3.util.Pair;
 /**
  * Levenberg–Marquardt fit (Commons Math) of y(t) = S·shape(D·t/L²) to data: the diffusivity D and
  * the final level S, with 95 % confidence intervals from s²·(JᵀJ)⁻¹ (s² = residual sum of squares
- * over n − 2) and Student's t with n − 2 degrees of freedom. Parameters are fitted scaled by a
- * start value found by a scan over twelve decades of D, so the fit does not depend on a user's
- * guess.
+ * over n − 2) and Student's t with n − 2 degrees of freedom. The fit is dimensionless: D is fitted
+ * as a multiple of a start value found by a scan over twelve decades of D (so it does not depend on
+ * a user's guess), and the data are divided by the scan's level before fitting, so a flux of 1e-15
+ * fits as well as one of 1e3 (the optimiser's and the covariance's tolerances are absolute in what
+ * they see).
  */
 public final class ShapeFit {
   /** The outcome: estimates, their covariance, and the residuals data − model. */
@@ -67,10 +69,14 @@ public final class ShapeFit {
     }
     double c = dRef / lengthSquared;
     int n = t.length;
+    double[] yScaled = new double[n];
+    for (int i = 0; i < n; i++) {
+      yScaled[i] = y[i] / sRef;
+    }
     LeastSquaresBuilder builder =
         new LeastSquaresBuilder()
             .start(new double[] {1, 1})
-            .target(y)
+            .target(yScaled)
             .maxEvaluations(10_000)
             .maxIterations(10_000)
             .model(
@@ -81,9 +87,9 @@ public final class ShapeFit {
                   double[][] jac = new double[n][2];
                   for (int i = 0; i < n; i++) {
                     double tau = c * a * t[i];
-                    v[i] = sRef * b * shape.at(tau);
-                    jac[i][0] = sRef * b * shape.slopeAt(tau) * c * t[i];
-                    jac[i][1] = sRef * shape.at(tau);
+                    v[i] = b * shape.at(tau);
+                    jac[i][0] = b * shape.slopeAt(tau) * c * t[i];
+                    jac[i][1] = shape.at(tau);
                   }
                   return new Pair<>(
                       new ArrayRealVector(v, false), new Array2DRowRealMatrix(jac, false));
@@ -102,14 +108,16 @@ public final class ShapeFit {
     double a = opt.getPoint().getEntry(0);
     double b = opt.getPoint().getEntry(1);
     double[] residuals = opt.getResiduals().toArray();
-    double rss = 0;
-    for (double r : residuals) {
-      rss += r * r;
+    double rssScaled = 0;
+    for (int i = 0; i < n; i++) {
+      rssScaled += residuals[i] * residuals[i];
+      residuals[i] *= sRef; // back in the data's unit
     }
+    double rss = rssScaled * sRef * sRef;
     int dof = n - 2;
     RealMatrix cov;
     try {
-      cov = opt.getCovariances(1e-14).scalarMultiply(rss / dof);
+      cov = opt.getCovariances(1e-14).scalarMultiply(rssScaled / dof);
     } catch (SingularMatrixException e) {
       throw new FitFailedException(
           "the " + shape.name() + " data do not determine both diffusivity and final level");

@@ -18,6 +18,9 @@ import java.util.Locale;
  * 1975, eq. 4.22), so share = h·√π / (4·√(D·t)).
  */
 final class NearSurfaceCheck {
+  /** The factor over the √t law from which the warning is given: 1/5 of the uptake from mesh. */
+  static final double MATTERS = 1.25;
+
   private NearSurfaceCheck() {}
 
   /**
@@ -49,8 +52,10 @@ final class NearSurfaceCheck {
       }
       depth /= n;
       double length = Math.sqrt(d / n * first);
-      if (depth > length) {
-        double factor = depth * Math.sqrt(Math.PI) / (4 * length);
+      double factor = depth * Math.sqrt(Math.PI) / (4 * length);
+      // a fifth or more of the early uptake from the mesh is worth a word (common practice for a
+      // warning threshold; smaller shares are within what a coarse first output shows anyway)
+      if (factor >= MATTERS) {
         out.add(
             String.format(
                 Locale.ROOT,
@@ -63,8 +68,8 @@ final class NearSurfaceCheck {
                 depth,
                 length,
                 DurationText.of(first),
-                Math.max(1, factor),
-                100 * Math.max(0, 1 - 1 / factor)));
+                factor,
+                100 * (1 - 1 / factor)));
       }
     }
     return out;

@@ -212,12 +212,16 @@ public final class RunPipeline {
         for (String w : warnings) {
           log.line("warning: " + w);
         }
+        int warned = warnings.size();
         relay = new ProgressRelay(recorder, spec.time().end(), progress, log);
         try (recorder) {
           totals =
               TransientRun.run(stepper, model.initialPhi(), settings, relay, checkpoints, cursor);
         }
         recorder.finish(totals);
+        for (String w : warnings.subList(warned, warnings.size())) {
+          log.line("warning: " + w); // what the run itself found (e.g. an overshoot)
+        }
         BalanceCheck.require(recorder.balanceAgainstAmounts(), spec, totals.endTime());
       } catch (IOException | UncheckedIOException e) {
         IOException cause = e instanceof UncheckedIOException u ? u.getCause() : (IOException) e;

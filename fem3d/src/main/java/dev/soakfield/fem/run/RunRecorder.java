@@ -25,6 +25,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * Listens to the stepper and hands every accepted step to the parts that each keep one record: the
@@ -53,6 +54,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
   private final double[] partAmounts0;
   private final double end;
   private final ThresholdWatch watch;
+  private final Optional<RangeWatch> range;
   private final double[] partVolume;
   private final double[] scales;
   private double[] tetS;
@@ -128,6 +130,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
             spec.quantities().massPerAmount().orElse(Double.NaN));
     partVolume = asm.integratePerGroup(nodalOnes, ones);
     watch = new ThresholdWatch(spec.thresholds(), mesh, spec.probes());
+    range = RangeWatch.of(model, end);
     // the amount before prescribed faces are raised
     balance = new BalanceLedger(mesh.faceGroups().size(), stepper.amount(model.initialPhi(), 0.0));
     partAmounts0 = totalAmounts(model.initialPhi(), 0.0);
@@ -170,6 +173,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
       clock.step(t, dt, phi);
       probes.step(t, dt, phi, shownS);
       watch.step(reading(t, phi));
+      range.ifPresent(r -> r.step(t, phi));
       series.row(rows.row(figures(t, dt, phi, inflow, maxima)));
       if (output) {
         writeFrame(t, phi);
@@ -238,6 +242,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     b.put("rec.clock.first", c[0]).put("rec.clock.previous", c[1]);
     probes.snapshot(b);
     watch.snapshot(b);
+    range.ifPresent(r -> r.snapshot(b));
     if (lastMaxima != null) {
       b.put("rec.last.maxima", lastMaxima);
     }
@@ -255,6 +260,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     clock.restore(new double[][] {b.get("rec.clock.first"), b.get("rec.clock.previous")});
     probes.restore(b);
     watch.restore(b);
+    range.ifPresent(r -> r.restore(b));
     lastMaxima = b.has("rec.last.maxima") ? b.get("rec.last.maxima") : null;
     frames.restore(b);
   }
@@ -308,6 +314,8 @@ final class RunRecorder implements StepListener, AutoCloseable {
       writeFrame(totals.endTime(), totals.finalPhi()); // a stop condition ended the run early
     }
     frames.finish();
+    boolean lumped = spec.time().capacity() == dev.soakfield.fem.casefile.CapacityForm.LUMPED;
+    range.flatMap(r -> r.warning(lumped)).ifPresent(warnings::add);
     StateFile.write(
         dir.resolve(StateFile.NAME),
         new StateFile.State(totals.endTime(), totals.finalPhi(), stepper.lawStates()));

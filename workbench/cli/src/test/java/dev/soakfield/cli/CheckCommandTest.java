@@ -22,8 +22,9 @@ class CheckCommandTest {
     // the sample mesh's own counts (read from the file; 8x8x3 hex cells split in 6 tetrahedra
     // plus the die block give 6912 tetrahedra)
     assertTrue(o.contains("1521 nodes, 6912 tetrahedra; elements linear (4-node)"), o);
-    assertTrue(o.contains("zmax") && o.contains("concentration 2.000"), o);
-    assertTrue(o.contains("exchange with environment 1.000, coefficient 1.000e-08 m/s"), o);
+    assertTrue(o.contains("zmax") && o.contains("concentration 2.000 kg/m^3"), o);
+    assertTrue(o.contains("exchange with environment 1.000 kg/m^3, coefficient 1.000e-08 m/s"), o);
+    assertTrue(o.contains("units: concentrations in kg/m^3, amounts in kg, species water"), o);
     // the demo says every exterior group's kind: nothing is sealed only by default
     assertTrue(!o.contains("unassigned exterior groups"), o);
     assertTrue(o.matches("(?s).*xmax\\s+exterior\\s+sealed.*"), o);

@@ -119,9 +119,11 @@ class ResultCommandsTest {
     List<String> lines = Files.readAllLines(csv);
     List<String> header = Series.split(lines.get(0));
     assertEquals("time [s]", header.get(0));
-    assertTrue(header.contains("amount [c*m^3]"), header.toString());
-    assertTrue(header.contains("probe:corner [c]"), header.toString());
-    assertTrue(header.contains("inflow_rate:zmax [c*m^3/s]"), header.toString());
+    // the sample declares kg/m^3: amounts in kg
+    assertTrue(header.contains("amount [kg]"), header.toString());
+    assertTrue(header.contains("probe:corner [kg/m^3]"), header.toString());
+    assertTrue(header.contains("inflow_rate:zmax [kg/s]"), header.toString());
+    assertTrue(header.contains("temperature [K]"), header.toString());
     assertEquals(
         Files.readAllLines(out.resolve("series.csv")).subList(1, lines.size()),
         lines.subList(1, lines.size()));
