@@ -23,11 +23,11 @@ import java.util.Optional;
 import java.util.stream.Stream;
 
 /**
- * The shortest bake at a temperature that brings a target (a volume group's maximum concentration
- * or a probe's value) below a level. One run with a stop condition brackets the time between two
- * accepted steps; bisection on the bake duration, each trial a transient run that ends exactly at
- * the trial time, narrows the bracket to the tolerance. The answer is the bracket's upper end, a
- * time at which the target is met.
+ * The shortest bake at a temperature that brings a target below a level: a part's largest or mean
+ * concentration, a probe, the whole amount, or the weight gain over the dry mass. One run with a
+ * stop condition brackets the time between two accepted steps; bisection on the bake duration, each
+ * trial a transient run that ends exactly at the trial time, narrows the bracket to the tolerance.
+ * The answer is the bracket's upper end, a time at which the target is met.
  */
 public final class BakeSearch {
   /** The loosest step-error tolerance a bake search runs with. */
@@ -38,11 +38,22 @@ public final class BakeSearch {
   /**
    * What to bake for.
    *
-   * @param target "group" or "probe"
-   * @param name the volume group or probe
-   * @param level the concentration to fall below
+   * @param target "group" (the part's largest concentration), "mean" (its mean), "probe", "amount"
+   *     (the whole amount) or "weight_gain" (the content in percent of the dry mass, what a balance
+   *     reads against the dry weight)
+   * @param name the part or probe ("" for amount and weight_gain)
+   * @param level the value to fall below, in the target's unit ({@link Result#unit()})
    */
-  public record Target(String target, String name, double level) {}
+  public record Target(String target, String name, double level) {
+    /** As the command line spells it: max:body, mean:body, probe:core, amount, weight_gain. */
+    public String spelling() {
+      return switch (target) {
+        case "group" -> "max:" + name;
+        case "amount", "weight_gain" -> target;
+        default -> target + ":" + name;
+      };
+    }
+  }
 
   /**
    * The bake environment.
@@ -63,6 +74,7 @@ public final class BakeSearch {
    * @param curveTimes times of the target's curve, s
    * @param curveValues the target quantity at those times
    * @param runs transient runs made
+   * @param unit the target's unit (the case's concentration unit, its amount unit, or %)
    */
   @SuppressWarnings("ArrayRecordComponent") // built once and handed over
   public record Result(
@@ -71,7 +83,8 @@ public final class BakeSearch {
       double lowerBound,
       double[] curveTimes,
       double[] curveValues,
-      int runs) {}
+      int runs,
+      String unit) {}
 
   /**
    * Searches the bake time.
@@ -88,17 +101,22 @@ public final class BakeSearch {
       Path work)
       throws IOException {
     RunPipeline.Prepared base = RunPipeline.prepare(caseFile);
-    checkTarget(base.spec(), target);
-    StopSpec stop = new StopSpec(target.target(), target.name(), true, target.level());
+    BakeTargets.check(base.spec(), target);
+    String unit = BakeTargets.unit(base.spec(), target);
+    // the run's own stop rule watches maxima and probes; other targets run the longest bake
+    Optional<StopSpec> stop =
+        target.target().equals("group") || target.target().equals("probe")
+            ? Optional.of(new StopSpec(target.target(), target.name(), true, target.level()))
+            : Optional.empty();
     Path first = work.resolve("bake-bracket");
     RunPipeline.run(
-        withBake(base, oven, oven.longest(), Optional.of(stop)),
+        withBake(base, oven, oven.longest(), stop),
         first,
         RunProgress.SILENT,
         RunOptions.defaults().withLaws(laws));
     Series firstSeries = Series.read(first.resolve(ResultFiles.SERIES));
     double[] curveTimes = firstSeries.require("time");
-    double[] curveValues = firstSeries.require(column(target));
+    double[] curveValues = BakeTargets.values(firstSeries, base, target);
     int runs = 1;
     int hit = -1;
     for (int i = 0; i < curveTimes.length; i++) {
@@ -109,11 +127,11 @@ public final class BakeSearch {
     }
     if (hit < 0) {
       deleteTree(first);
-      return new Result(false, Double.NaN, oven.longest(), curveTimes, curveValues, runs);
+      return new Result(false, Double.NaN, oven.longest(), curveTimes, curveValues, runs, unit);
     }
     if (hit == 0) {
       deleteTree(first);
-      return new Result(true, 0.0, 0.0, curveTimes, curveValues, runs);
+      return new Result(true, 0.0, 0.0, curveTimes, curveValues, runs, unit);
     }
     double lo = curveTimes[hit - 1];
     double hi = curveTimes[hit];
@@ -125,7 +143,8 @@ public final class BakeSearch {
           trial,
           RunProgress.SILENT,
           RunOptions.defaults().withLaws(laws));
-      double[] endValues = Series.read(trial.resolve(ResultFiles.SERIES)).require(column(target));
+      double[] endValues =
+          BakeTargets.values(Series.read(trial.resolve(ResultFiles.SERIES)), base, target);
       runs++;
       deleteTree(trial);
       if (endValues[endValues.length - 1] < target.level()) {
@@ -135,31 +154,7 @@ public final class BakeSearch {
       }
     }
     deleteTree(first);
-    return new Result(true, hi, lo, curveTimes, curveValues, runs);
-  }
-
-  private static void checkTarget(CaseSpec spec, Target t) {
-    boolean known =
-        t.target().equals("group")
-            ? spec.materials().containsKey(t.name())
-            : spec.probes().stream().anyMatch(p -> p.name().equals(t.name()));
-    if (!known) {
-      List<String> names =
-          t.target().equals("group")
-              ? List.copyOf(spec.materials().keySet())
-              : spec.probes().stream().map(p -> p.name()).toList();
-      throw new IllegalArgumentException(
-          "bake target: found "
-              + t.target()
-              + " '"
-              + t.name()
-              + "', expected one of "
-              + String.join(", ", names));
-    }
-  }
-
-  private static String column(Target t) {
-    return (t.target().equals("group") ? "max:" : "probe:") + t.name();
+    return new Result(true, hi, lo, curveTimes, curveValues, runs, unit);
   }
 
   /** The case with the oven as its whole exposure, ending at {@code duration}. */

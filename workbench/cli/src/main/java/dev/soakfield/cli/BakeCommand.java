@@ -26,15 +26,19 @@ import picocli.CommandLine.Spec;
     name = "bake",
     mixinStandardHelpOptions = true,
     description = {
-      "Finds the shortest bake at a temperature that brings a part's maximum concentration (or a"
-          + " probe) below a level.",
+      "Finds the shortest bake at a temperature that brings a target below a level: a part's"
+          + " largest (max:PART) or mean (mean:PART) concentration, a probe (probe:NAME), the whole"
+          + " amount (amount) or the weight gain over the dry mass in percent (weight_gain).",
       "The case gives the part, its materials (Arrhenius data make the temperature matter), its"
           + " faces and where the bake starts (\"initial\", e.g. {\"from\": \"soak-run\"}); the"
           + " oven replaces its exposure. One run brackets the time, bisection narrows it."
     })
 final class BakeCommand implements Callable<Integer> {
   private static final Pattern TARGET =
-      Pattern.compile("(max|probe):([^<]+)<\\s*([-+0-9.eE]+)\\s*");
+      Pattern.compile(
+          "(?:(max|probe|mean):([^<]+)|(amount|weight_gain))\\s*<\\s*([-+0-9.eE]+)\\s*");
+  private static final String SPELLINGS =
+      "max:PART<LEVEL, mean:PART<LEVEL, probe:NAME<LEVEL, amount<LEVEL or weight_gain<PERCENT";
 
   @Spec CommandSpec spec;
 
@@ -53,8 +57,11 @@ final class BakeCommand implements Callable<Integer> {
   @Option(
       names = "--target",
       required = true,
-      paramLabel = "max:GROUP<LEVEL|probe:NAME<LEVEL",
-      description = "What must fall below the level, e.g. \"max:body<0.05\".")
+      paramLabel = "TARGET<LEVEL",
+      description =
+          "What must fall below the level: max:PART, mean:PART, probe:NAME, amount or"
+              + " weight_gain (percent of the dry mass), e.g. \"max:body<0.05\","
+              + " \"weight_gain<0.02\". Levels are in the case's units.")
   String target;
 
   @Option(
@@ -88,8 +95,7 @@ final class BakeCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     Matcher m = TARGET.matcher(target);
     if (!m.matches()) {
-      throw new UserInputException(
-          "--target: found '" + target + "', expected max:GROUP<LEVEL or probe:NAME<LEVEL");
+      throw new UserInputException("--target: found '" + target + "', expected " + SPELLINGS);
     }
     if (!(humidity >= 0 && humidity <= 1)) {
       throw new UserInputException("--humidity: found " + humidity + ", expected 0 to 1");
@@ -100,11 +106,7 @@ final class BakeCommand implements Callable<Integer> {
     double kelvin = OptionValues.si(temperature, "K", "--temperature");
     double longestS = OptionValues.si(longest, "s", "--longest");
     double pa = OptionValues.si(pressure, "Pa", "--pressure");
-    BakeSearch.Target t =
-        new BakeSearch.Target(
-            m.group(1).equals("max") ? "group" : "probe",
-            m.group(2).strip(),
-            Double.parseDouble(m.group(3)));
+    BakeSearch.Target t = target(m);
     Path work = Files.createTempDirectory("soakfield-bake");
     BakeSearch.Result r;
     try {
@@ -129,6 +131,7 @@ final class BakeCommand implements Callable<Integer> {
       root.put("not_enough", r.lowerBound());
       root.put("temperature", kelvin);
       root.put("target", target);
+      root.put("unit", r.unit());
       root.put("runs", r.runs());
       root.put("curve", Map.of("time", r.curveTimes(), "value", r.curveValues()));
       out.println(
@@ -140,28 +143,39 @@ final class BakeCommand implements Callable<Integer> {
     return ExitCodes.OK;
   }
 
+  private static BakeSearch.Target target(Matcher m) {
+    double level = Double.parseDouble(m.group(4));
+    if (m.group(3) != null) {
+      return new BakeSearch.Target(m.group(3), "", level);
+    }
+    String kind = m.group(1).equals("max") ? "group" : m.group(1);
+    return new BakeSearch.Target(kind, m.group(2).strip(), level);
+  }
+
   private void print(PrintWriter out, BakeSearch.Result r, double kelvin) {
     if (r.met()) {
       out.printf(
           Locale.ROOT,
-          "bake at %.2f K (%.1f °C): %s brings %s (between %s and %s; %d runs)%n",
+          "bake at %.2f K (%.1f °C): %s brings %s [%s] (between %s and %s; %d runs)%n",
           kelvin,
           kelvin - 273.15,
           DurationText.readable(r.time()),
           target,
+          r.unit(),
           DurationText.readable(r.lowerBound()),
           DurationText.readable(r.time()),
           r.runs());
     } else {
       out.printf(
           Locale.ROOT,
-          "bake at %.2f K: %s is not reached within %s; lengthen --longest or raise the"
+          "bake at %.2f K: %s [%s] is not reached within %s; lengthen --longest or raise the"
               + " temperature%n",
           kelvin,
           target,
+          r.unit(),
           DurationText.readable(r.lowerBound()));
     }
-    out.println("curve (time [h], value):");
+    out.println("curve (time [h], value [" + r.unit() + "]):");
     int stride = Math.max(1, r.curveTimes().length / 20);
     for (int i = 0; i < r.curveTimes().length; i += stride) {
       out.printf(Locale.ROOT, "  %12.4f  %.6g%n", r.curveTimes()[i] / 3600, r.curveValues()[i]);

@@ -65,6 +65,37 @@ class BakeCommandTest {
   }
 
   @Test
+  void theMeanAndTheWholeAmountAreTargetsToo() throws IOException {
+    Path part = wetSheet();
+    CliRun mean =
+        CliRun.of(
+            "bake",
+            part.toString(),
+            "--temperature",
+            "400",
+            "--target",
+            "mean:body<0.25",
+            "--json");
+    assertEquals(0, mean.exitCode(), mean.err());
+    JsonNode j = new ObjectMapper().readTree(mean.out());
+    // the sheet's mean falls to 1/4 at τ = D t / L² where 1 − M_t/M_∞ = 0.25 (Crank eq. 4.18):
+    // τ = −ln(0.25 π² / 8) / π² = 0.0213 once the higher terms have died out
+    double d = 1e-4 * Math.exp(-40000 / (8.314462618 * 400));
+    double expected = -Math.log(0.25 * Math.PI * Math.PI / 8) / (Math.PI * Math.PI) * 1e-6 / d;
+    assertEquals(expected, j.get("bake_time").asDouble(), 0.02 * expected);
+    assertEquals("c", j.get("unit").asText()); // the case declares no unit
+    CliRun amount =
+        CliRun.of("bake", part.toString(), "--temperature", "400", "--target", "amount < 2.5e-12");
+    assertEquals(0, amount.exitCode(), amount.err());
+    assertTrue(amount.out().contains("brings amount < 2.5e-12 [c*m^3]"), amount.out());
+    CliRun gain =
+        CliRun.of("bake", part.toString(), "--temperature", "400", "--target", "weight_gain<0.1");
+    assertEquals(2, gain.exitCode());
+    assertTrue(gain.err().contains("without a density"), gain.err());
+    assertFalse(gain.err().contains("\tat "), gain.err());
+  }
+
+  @Test
   void anUnknownGroupNamesTheChoices() throws IOException {
     Path part = wetSheet();
     CliRun r =
