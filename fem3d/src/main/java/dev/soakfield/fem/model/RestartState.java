@@ -9,7 +9,9 @@ import dev.soakfield.fem.casefile.CaseReader;
 import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.casefile.MaterialSpec;
 import dev.soakfield.fem.casefile.SourcePlace;
+import dev.soakfield.fem.physics.AmbientPotential;
 import dev.soakfield.fem.physics.Arrhenius;
+import dev.soakfield.fem.physics.SorptionLaw;
 import dev.soakfield.fem.results.ResultFiles;
 import dev.soakfield.fem.results.StateFile;
 import dev.soakfield.fem.units.ConcentrationUnit;
@@ -89,7 +91,40 @@ final class RestartState {
               startTemperature,
               Arrays.equals(endSolubility, startSolubility) ? "" : " with other solubilities"));
     }
+    environmentChange(spec, earlier, state.time()).ifPresent(warnings::add);
     return phi;
+  }
+
+  /** A step in the surroundings at the restart, said because the faces take it at once. */
+  private static java.util.Optional<String> environmentChange(
+      CaseSpec spec, CaseSpec earlier, double earlierEnd) {
+    if (spec.exposure().isEmpty()
+        || earlier.exposure().isEmpty()
+        || spec.law() == SorptionLaw.PLAIN
+        || earlier.law() != spec.law()) {
+      return java.util.Optional.empty();
+    }
+    double before = AmbientPotential.of(earlier.law(), earlier.exposure().get()).at(earlierEnd);
+    double after = AmbientPotential.of(spec.law(), spec.exposure().get()).at(0);
+    if (before == after) {
+      return java.util.Optional.empty();
+    }
+    String unit = spec.law() == SorptionLaw.HENRY ? "Pa" : "√Pa";
+    return java.util.Optional.of(
+        String.format(
+            Locale.ROOT,
+            "initial.from: the earlier run ended at t = %.6g s under an ambient potential of %s %s"
+                + " and this one starts (its clock at 0) under %s %s: the exposed faces take"
+                + " the new value at once",
+            earlierEnd,
+            potential(before),
+            unit,
+            potential(after),
+            unit));
+  }
+
+  private static String potential(double v) {
+    return v == 0 ? "0" : String.format(Locale.ROOT, "%.4g", v);
   }
 
   private static boolean lumped(CaseSpec spec) {

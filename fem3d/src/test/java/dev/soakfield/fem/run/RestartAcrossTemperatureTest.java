@@ -84,5 +84,13 @@ class RestartAcrossTemperatureTest {
     assertTrue(
         bake.warnings().stream().anyMatch(w -> w.contains("358.15 K") && w.contains("398.15 K")),
         bake.warnings().toString());
+    // the humidity steps from 0.85 to 0 at the restart, and the run says so: the ambient potential
+    // falls from RH·p_sat(85 °C) ≈ 0.85 · 57.87 kPa (IAPWS-IF97, from memory to 4 digits) to 0
+    String step =
+        bake.warnings().stream()
+            .filter(w -> w.contains("ambient potential"))
+            .findFirst()
+            .orElseThrow(() -> new AssertionError(bake.warnings().toString()));
+    assertTrue(step.contains("4.919e+04") && step.contains("under 0 Pa"), step);
   }
 }
