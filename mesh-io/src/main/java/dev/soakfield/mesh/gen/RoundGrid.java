@@ -27,18 +27,33 @@ final class RoundGrid {
    * so the ring stays conforming within itself.
    */
   static HexGrid cylinder(double radius, double height, int nRadial, int nAround, int nz) {
+    return cylinder(
+        radius, TensorGrid.planes(0, height, nz), TensorGrid.planes(0, 1, nRadial), nAround);
+  }
+
+  /** Square half-side: about matching the square's cells and the ring's depth, kept in range. */
+  static double squareHalfSide(double radius, int nRadial, int nAround) {
     int m = nAround / 4;
-    // Square half-side: roughly matching square cell width and ring depth, kept away from the
-    // circle (the corners sit at s * sqrt 2) and from a vanishing square.
-    double ratio = Math.max(0.3, Math.min(0.5, m / (double) (m + 2 * nRadial)));
-    double s = radius * ratio;
+    // kept away from the circle (the corners sit at s * sqrt 2) and from a vanishing square
+    return radius * Math.max(0.3, Math.min(0.5, m / (double) (m + 2 * nRadial)));
+  }
+
+  /**
+   * As {@link #cylinder(double, double, int, int, int)} with the ring's layers at blend weights
+   * {@code weights} (0 at the square, 1 at the circle; graded toward the side when they crowd
+   * there).
+   */
+  static HexGrid cylinder(double radius, double[] zs, double[] weights, int nAround) {
+    int nRadial = weights.length - 1;
+    int nz = zs.length - 1;
+    int m = nAround / 4;
+    double s = squareHalfSide(radius, nRadial, nAround);
     int sq = (m + 1) * (m + 1);
     int perLevel = sq + nAround * nRadial;
-    double[] zs = TensorGrid.planes(0, height, nz);
     double[] xyz = new double[3 * perLevel * (nz + 1)];
     double[] ring = new double[2 * nAround * nRadial];
     for (int r = 1; r <= nRadial; r++) {
-      double w = r / (double) nRadial;
+      double w = weights[r];
       for (int t = 0; t < nAround; t++) {
         double angle = -0.75 * Math.PI + 2 * Math.PI * t / nAround;
         double cx = radius * Math.cos(angle);
@@ -118,13 +133,22 @@ final class RoundGrid {
    */
   static HexGrid pipe(
       double innerRadius, double outerRadius, double height, int nRadial, int nAround, int nz) {
+    return pipe(
+        TensorGrid.planes(innerRadius, outerRadius - innerRadius, nRadial),
+        TensorGrid.planes(0, height, nz),
+        nAround);
+  }
+
+  /** As above with the wall's node circles at {@code radii}, inner to outer. */
+  static HexGrid pipe(double[] radii, double[] zs, int nAround) {
+    int nRadial = radii.length - 1;
+    int nz = zs.length - 1;
+    double outerRadius = radii[nRadial];
     int perLevel = (nRadial + 1) * nAround;
-    double[] zs = TensorGrid.planes(0, height, nz);
     double[] xyz = new double[3 * perLevel * (nz + 1)];
     for (int k = 0; k <= nz; k++) {
       for (int r = 0; r <= nRadial; r++) {
-        double rho =
-            r == nRadial ? outerRadius : innerRadius + (outerRadius - innerRadius) * r / nRadial;
+        double rho = r == nRadial ? outerRadius : radii[r];
         for (int t = 0; t < nAround; t++) {
           double angle = 2 * Math.PI * t / nAround;
           put(

@@ -65,12 +65,19 @@ public final class StructuredMesher {
    * groups xmin, xmax, ymin, ymax, zmin, zmax.
    */
   public static TetMesh box(double lx, double ly, double lz, int nx, int ny, int nz, int order) {
+    return box(lx, ly, lz, nx, ny, nz, order, Grading.NONE);
+  }
+
+  /** A box as above, its cells graded toward the faces {@code grading} names (xmin..zmax). */
+  public static TetMesh box(
+      double lx, double ly, double lz, int nx, int ny, int nz, int order, Grading grading) {
     checkBox(lx, ly, lz, nx, ny, nz, order);
+    grading.onlyFaces(BOX_FACES, "box");
     HexGrid grid =
         TensorGrid.build(
-            TensorGrid.planes(0, lx, nx),
-            TensorGrid.planes(0, ly, ny),
-            TensorGrid.planes(0, lz, nz),
+            Grading.planes(0, lx, nx, grading.at("xmin"), grading.at("xmax")),
+            Grading.planes(0, ly, ny, grading.at("ymin"), grading.at("ymax")),
+            Grading.planes(0, lz, nz, grading.at("zmin"), grading.at("zmax")),
             new int[nx * ny * nz],
             new int[1],
             List.of(new VolumeGroup(BODY, 1)),
@@ -274,6 +281,79 @@ public final class StructuredMesher {
    */
   public static TetMesh cylinder(
       double radius, double height, int nRadial, int nAround, int nz, int order) {
+    return cylinder(radius, height, nRadial, nAround, nz, order, Grading.NONE, false);
+  }
+
+  /** The face groups of {@link #cylinder}. */
+  public static final java.util.Set<String> CYLINDER_FACES =
+      java.util.Set.of("side", "bottom", "top");
+
+  /** The face groups of {@link #pipe}. */
+  public static final java.util.Set<String> PIPE_FACES =
+      java.util.Set.of("inner", "outer", "bottom", "top");
+
+  /** The face groups of {@link #box}. */
+  public static final java.util.Set<String> BOX_FACES =
+      java.util.Set.of("xmin", "xmax", "ymin", "ymax", "zmin", "zmax");
+
+  /**
+   * The cell counts {@link #cylinder} meshes with: the given ones, with the around and axial counts
+   * (and the radial one, if its cells are the long ones) raised where a cell would be more than
+   * four times longer than it is thin ({@link ShapeGuard}), unless {@code asGiven}.
+   */
+  public static int[] cylinderCells(
+      double radius,
+      double height,
+      int nRadial,
+      int nAround,
+      int nz,
+      Grading grading,
+      boolean asGiven) {
+    int[] n = {nRadial, nAround, nz};
+    if (asGiven) {
+      return n;
+    }
+    for (int pass = 0; pass < 8; pass++) {
+      double s = RoundGrid.squareHalfSide(radius, n[0], n[1]);
+      double[] w = Grading.planes(0, 1, n[0], 1, grading.at("side"));
+      double[] sizes = new double[n[0] + 1];
+      for (int i = 0; i < n[0]; i++) {
+        sizes[i] = (w[i + 1] - w[i]) * (radius - s);
+      }
+      sizes[n[0]] = 2 * s / (n[1] / 4.0); // the central square's cells
+      int[] next =
+          ShapeGuard.counts(
+              sizes,
+              8 * s,
+              2 * Math.PI * radius,
+              height,
+              n,
+              4,
+              grading.at("side") != 1,
+              ShapeGuard.SKEWED_ASPECT);
+      if (java.util.Arrays.equals(next, n)) {
+        break;
+      }
+      n = next;
+    }
+    return n;
+  }
+
+  /**
+   * A cylinder as {@link #cylinder(double, double, int, int, int, int)}, its ring of cells graded
+   * toward the side ({@code "side"}) and its length toward {@code "bottom"} and {@code "top"}, with
+   * the counts of {@link #cylinderCells}.
+   */
+  public static TetMesh cylinder(
+      double radius,
+      double height,
+      int nRadial,
+      int nAround,
+      int nz,
+      int order,
+      Grading grading,
+      boolean asGiven) {
+    grading.onlyFaces(CYLINDER_FACES, "cylinder");
     Args.length("radius", radius);
     Args.length("height", height);
     Args.count("cells across the radius", nRadial);
@@ -283,9 +363,16 @@ public final class StructuredMesher {
       throw new IllegalArgumentException(
           "cells around: found " + nAround + ", expected a multiple of 4, at least 8");
     }
-    double m = nAround / 4.0;
-    Args.size((m * m + nAround * (double) nRadial) * nz, (m + 1) * (m + 1) * (nz + 1.0), order);
-    TetMesh mesh = finish(RoundGrid.cylinder(radius, height, nRadial, nAround, nz), order);
+    int[] n = cylinderCells(radius, height, nRadial, nAround, nz, grading, asGiven);
+    double m = n[1] / 4.0;
+    Args.size((m * m + n[1] * (double) n[0]) * n[2], (m + 1) * (m + 1) * (n[2] + 1.0), order);
+    HexGrid grid =
+        RoundGrid.cylinder(
+            radius,
+            Grading.planes(0, height, n[2], grading.at("bottom"), grading.at("top")),
+            Grading.planes(0, 1, n[0], 1, grading.at("side")),
+            n[1]);
+    TetMesh mesh = finish(grid, order);
     return order == 2 ? CircleSnap.snap(mesh, radius) : mesh;
   }
 
@@ -306,6 +393,72 @@ public final class StructuredMesher {
       int nAround,
       int nz,
       int order) {
+    return pipe(innerRadius, outerRadius, height, nRadial, nAround, nz, order, Grading.NONE, false);
+  }
+
+  /**
+   * The cell counts {@link #pipe} meshes with: the given ones, raised where a cell would be more
+   * than four times longer than it is thin ({@link ShapeGuard}), unless {@code asGiven}.
+   */
+  public static int[] pipeCells(
+      double innerRadius,
+      double outerRadius,
+      double height,
+      int nRadial,
+      int nAround,
+      int nz,
+      Grading grading,
+      boolean asGiven) {
+    int[] n = {nRadial, nAround, nz};
+    if (asGiven) {
+      return n;
+    }
+    for (int pass = 0; pass < 8; pass++) {
+      double[] r =
+          Grading.planes(
+              innerRadius,
+              outerRadius - innerRadius,
+              n[0],
+              grading.at("inner"),
+              grading.at("outer"));
+      double[] sizes = new double[n[0]];
+      for (int i = 0; i < n[0]; i++) {
+        sizes[i] = r[i + 1] - r[i];
+      }
+      int[] next =
+          ShapeGuard.counts(
+              sizes,
+              2 * Math.PI * innerRadius,
+              2 * Math.PI * outerRadius,
+              height,
+              n,
+              1,
+              grading.at("inner") != 1 || grading.at("outer") != 1,
+              ShapeGuard.ASPECT);
+      if (java.util.Arrays.equals(next, n)) {
+        break;
+      }
+      n = next;
+    }
+    return n;
+  }
+
+  /**
+   * A pipe as {@link #pipe(double, double, double, int, int, int, int)}, graded through the wall
+   * toward {@code "inner"} and {@code "outer"} and along it toward {@code "bottom"} and {@code
+   * "top"}, with the counts of {@link #pipeCells}.
+   */
+  public static TetMesh pipe(
+      double innerRadius,
+      double outerRadius,
+      double height,
+      int nRadial,
+      int nAround,
+      int nz,
+      int order,
+      Grading grading,
+      boolean asGiven) {
+    grading.onlyFaces(PIPE_FACES, "pipe");
     Args.length("inner radius", innerRadius);
     Args.length("outer radius", outerRadius);
     Args.length("height", height);
@@ -324,10 +477,19 @@ public final class StructuredMesher {
       throw new IllegalArgumentException(
           "cells around: found " + nAround + ", expected at least 3");
     }
-    Args.size(
-        (double) nAround * nRadial * nz, (double) nAround * (nRadial + 1) * (nz + 1.0), order);
-    TetMesh mesh =
-        finish(RoundGrid.pipe(innerRadius, outerRadius, height, nRadial, nAround, nz), order);
+    int[] n = pipeCells(innerRadius, outerRadius, height, nRadial, nAround, nz, grading, asGiven);
+    Args.size((double) n[1] * n[0] * n[2], (double) n[1] * (n[0] + 1) * (n[2] + 1.0), order);
+    HexGrid grid =
+        RoundGrid.pipe(
+            Grading.planes(
+                innerRadius,
+                outerRadius - innerRadius,
+                n[0],
+                grading.at("inner"),
+                grading.at("outer")),
+            Grading.planes(0, height, n[2], grading.at("bottom"), grading.at("top")),
+            n[1]);
+    TetMesh mesh = finish(grid, order);
     return order == 2 ? CircleSnap.snap(mesh, innerRadius, outerRadius) : mesh;
   }
 

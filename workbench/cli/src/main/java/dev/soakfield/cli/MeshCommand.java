@@ -41,6 +41,11 @@ final class MeshCommand implements Runnable {
 
     abstract TetMesh build();
 
+    /** What the shape changed from the request (raised cell counts), or empty. */
+    String note() {
+      return "";
+    }
+
     @Override
     public Integer call() throws Exception {
       TetMesh mesh;
@@ -48,6 +53,9 @@ final class MeshCommand implements Runnable {
         mesh = build();
       } catch (IllegalArgumentException e) {
         throw new UserInputException(e.getMessage());
+      }
+      if (!note().isEmpty()) {
+        spec.commandLine().getOut().println(note());
       }
       output.write(mesh, spec.commandLine().getOut());
       return ExitCodes.OK;
@@ -76,11 +84,14 @@ final class MeshCommand implements Runnable {
         description = "Cells along x, y and z.")
     String cells;
 
+    @Mixin GradeOption grade;
+
     @Override
     TetMesh build() {
       double[] l = Lengths.parseList(size, 3, "--size");
       int[] n = Lengths.parseCounts(cells, 3, "--cells");
-      return StructuredMesher.box(l[0], l[1], l[2], n[0], n[1], n[2], output.order());
+      return StructuredMesher.box(
+          l[0], l[1], l[2], n[0], n[1], n[2], output.order(), grade.grading());
     }
   }
 
@@ -200,16 +211,25 @@ final class MeshCommand implements Runnable {
         description = "Cells across the radius, around the circumference, and along z.")
     String cells;
 
+    @Mixin GradeOption grade;
+
+    @Mixin RoundCells round;
+
     @Override
     TetMesh build() {
       int[] n = Lengths.parseCounts(cells, 3, "--cells");
+      double r = Lengths.parse(radius, "--radius");
+      double h = Lengths.parse(height, "--height");
+      round.used(
+          n,
+          StructuredMesher.cylinderCells(r, h, n[0], n[1], n[2], grade.grading(), round.asGiven));
       return StructuredMesher.cylinder(
-          Lengths.parse(radius, "--radius"),
-          Lengths.parse(height, "--height"),
-          n[0],
-          n[1],
-          n[2],
-          output.order());
+          r, h, n[0], n[1], n[2], output.order(), grade.grading(), round.asGiven);
+    }
+
+    @Override
+    String note() {
+      return round.note();
     }
   }
 
@@ -242,17 +262,29 @@ final class MeshCommand implements Runnable {
         description = "Cells through the wall, around the circumference, and along z.")
     String cells;
 
+    @Mixin GradeOption grade;
+
+    @Mixin RoundCells round;
+
     @Override
     TetMesh build() {
       int[] n = Lengths.parseCounts(cells, 3, "--cells");
+      double ri = Lengths.parse(inner, "--inner-radius");
+      double ro = Lengths.parse(outer, "--outer-radius");
+      double h = Lengths.parse(height, "--height");
+      if (ri < ro) {
+        round.used(
+            n,
+            StructuredMesher.pipeCells(
+                ri, ro, h, n[0], n[1], n[2], grade.grading(), round.asGiven));
+      }
       return StructuredMesher.pipe(
-          Lengths.parse(inner, "--inner-radius"),
-          Lengths.parse(outer, "--outer-radius"),
-          Lengths.parse(height, "--height"),
-          n[0],
-          n[1],
-          n[2],
-          output.order());
+          ri, ro, h, n[0], n[1], n[2], output.order(), grade.grading(), round.asGiven);
+    }
+
+    @Override
+    String note() {
+      return round.note();
     }
   }
 }

@@ -6,6 +6,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.soakfield.mesh.TetMesh;
+import dev.soakfield.mesh.load.MeshLoader;
+import dev.soakfield.mesh.topo.AssemblyOptions;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
@@ -146,6 +149,94 @@ class MeshAndInfoCommandTest {
     assertTrue(r.err().contains("bad.msh"), r.err());
     assertTrue(r.err().contains("line 5"), r.err());
     assertFalse(r.err().contains("at dev.soakfield"), r.err());
+  }
+
+  @Test
+  void gradingAndTheRoundMeshersShapeGuardSpeakUp() throws Exception {
+    Path graded = dir.resolve("graded.msh");
+    CliRun g =
+        CliRun.of(
+            "mesh",
+            "box",
+            "--size",
+            "1mm,1mm,1mm",
+            "--cells",
+            "6,1,1",
+            "--grade",
+            "xmin:2",
+            "--out",
+            graded.toString());
+    assertEquals(0, g.exitCode(), g.err());
+    // the first cell against xmin is 1 mm · (2 − 1)/(2⁶ − 1) (a geometric series)
+    TetMesh m = MeshLoader.load(graded, AssemblyOptions.defaults()).mesh();
+    double first = Double.POSITIVE_INFINITY;
+    for (int i = 0; i < m.nodeCount(); i++) {
+      if (m.coord(i, 0) > 0) {
+        first = Math.min(first, m.coord(i, 0));
+      }
+    }
+    assertEquals(1e-3 / 63, first, 1e-12);
+    CliRun face =
+        CliRun.of(
+            "mesh",
+            "box",
+            "--size",
+            "1,1,1",
+            "--cells",
+            "2,2,2",
+            "--grade",
+            "inner:1.2",
+            "--out",
+            dir.resolve("x.msh").toString());
+    assertEquals(2, face.exitCode());
+    assertTrue(face.err().contains("expected a face of the box: xmax, xmin"), face.err());
+    CliRun ratio =
+        CliRun.of(
+            "mesh",
+            "box",
+            "--size",
+            "1,1,1",
+            "--cells",
+            "2,2,2",
+            "--grade",
+            "xmin:-1",
+            "--out",
+            dir.resolve("x.msh").toString());
+    assertEquals(2, ratio.exitCode());
+    assertTrue(ratio.err().contains("--grade: found 'xmin:-1'"), ratio.err());
+    CliRun pipe =
+        CliRun.of(
+            "mesh",
+            "pipe",
+            "--inner-radius",
+            "50mm",
+            "--outer-radius",
+            "60mm",
+            "--height",
+            "20mm",
+            "--cells",
+            "4,24,1",
+            "--out",
+            dir.resolve("pipe.msh").toString());
+    assertEquals(0, pipe.exitCode(), pipe.err());
+    assertTrue(pipe.out().contains("cells raised from 4,24,1 to 4,"), pipe.out());
+    CliRun kept =
+        CliRun.of(
+            "mesh",
+            "pipe",
+            "--inner-radius",
+            "50mm",
+            "--outer-radius",
+            "60mm",
+            "--height",
+            "20mm",
+            "--cells",
+            "4,24,1",
+            "--cells-as-given",
+            "--out",
+            dir.resolve("kept.msh").toString());
+    assertEquals(0, kept.exitCode(), kept.err());
+    assertTrue(kept.out().contains("576 4-node tetrahedra"), kept.out()); // 6 · 4 · 24 · 1
   }
 
   @Test
