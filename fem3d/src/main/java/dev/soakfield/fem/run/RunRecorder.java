@@ -299,11 +299,19 @@ final class RunRecorder implements StepListener, AutoCloseable {
       c[i] = nodalS[i] * phi[i];
     }
     List<VtuWriter.Field> f = new ArrayList<>();
-    f.add(new VtuWriter.Field("c", 1, c));
-    f.add(new VtuWriter.Field("phi", 1, phi.clone()));
-    f.add(new VtuWriter.Field("first_exceed", 1, clock.firstTimes()));
+    f.add(new VtuWriter.Field("c", 1, c, spec.quantities().concentration()));
+    String potential =
+        switch (model.law()) {
+          case HENRY -> "Pa";
+          case SIEVERTS -> "Pa^0.5";
+          case PLAIN -> spec.quantities().concentration();
+        };
+    f.add(new VtuWriter.Field("phi", 1, phi.clone(), potential));
+    f.add(new VtuWriter.Field("first_exceed", 1, clock.firstTimes(), "s"));
     if (stepper.hasSourceLaws()) {
-      f.add(new VtuWriter.Field("trapped", 1, stepper.trappedField(t)));
+      f.add(
+          new VtuWriter.Field(
+              "trapped", 1, stepper.trappedField(t), spec.quantities().amount() + "/m^3"));
     }
     frames.write(t, f);
   }

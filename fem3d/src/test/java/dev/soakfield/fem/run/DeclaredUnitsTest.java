@@ -88,6 +88,13 @@ class DeclaredUnitsTest {
     for (String cell : Series.split(header)) {
       assertTrue(cell.contains("["), cell + " has no unit in " + header);
     }
+    // the field frames say theirs too
+    try (var files = Files.walk(dir.resolve("out"))) {
+      Path frame = files.filter(p -> p.toString().endsWith(".vtu")).findFirst().orElseThrow();
+      String vtu = Files.readString(frame, java.nio.charset.StandardCharsets.ISO_8859_1);
+      assertTrue(
+          vtu.contains("Name=\"c\" NumberOfComponents=\"1\" units=\"wppm\""), frame.toString());
+    }
   }
 
   @Test

@@ -31,13 +31,20 @@ final class VtkArray {
   private static final int CHUNK = 1 << 16;
 
   final String name;
+  final String unit; // "" for none: written as the DataArray's units attribute
   final Type type;
   final int components;
   private final double[] doubles;
   private final int[] ints;
 
   private VtkArray(String name, Type type, int components, double[] doubles, int[] ints) {
+    this(name, "", type, components, doubles, ints);
+  }
+
+  private VtkArray(
+      String name, String unit, Type type, int components, double[] doubles, int[] ints) {
     this.name = name;
+    this.unit = unit;
     this.type = type;
     this.components = components;
     this.doubles = doubles;
@@ -46,6 +53,11 @@ final class VtkArray {
 
   static VtkArray float64(String name, int components, double[] values) {
     return new VtkArray(name, Type.FLOAT64, components, values, null);
+  }
+
+  /** A Float64 array whose DataArray says its unit ({@code units="..."}, which VTK ignores). */
+  static VtkArray float64(String name, String unit, int components, double[] values) {
+    return new VtkArray(name, unit, Type.FLOAT64, components, values, null);
   }
 
   static VtkArray integers(String name, Type type, int components, int[] values) {

@@ -120,6 +120,10 @@ final class VtuDocument {
     StringBuilder tag = new StringBuilder("        <DataArray type=\"");
     tag.append(array.type.vtkName).append("\" Name=\"").append(Xml.escape(array.name)).append('"');
     tag.append(" NumberOfComponents=\"").append(array.components).append('"');
+    if (!array.unit.isEmpty()) {
+      // not a VTK attribute: VTK's readers ignore it, people and scripts reading the file see it
+      tag.append(" units=\"").append(Xml.escape(array.unit)).append('"');
+    }
     switch (format) {
       case ASCII -> tag.append(" format=\"ascii\">\n");
       case BINARY -> tag.append(" format=\"binary\">\n          ");

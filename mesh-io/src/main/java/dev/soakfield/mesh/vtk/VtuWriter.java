@@ -40,10 +40,19 @@ public final class VtuWriter {
    * @param components 1 (scalar) or 3 (vector)
    */
   @SuppressWarnings("ArrayRecordComponent") // a field is a view of the caller's values
-  public record Field(String name, int components, double[] values) {
+  public record Field(String name, int components, double[] values, String unit) {
+    /** A field without a stated unit. */
+    public Field(String name, int components, double[] values) {
+      this(name, components, values, "");
+    }
+
     public Field {
       Objects.requireNonNull(name, "name");
       Objects.requireNonNull(values, "values");
+      Objects.requireNonNull(unit, "unit");
+      if (!Xml.isPlainText(unit)) {
+        throw new IllegalArgumentException("unit of field '" + name + "': control characters");
+      }
       if (name.isBlank() || !Xml.isPlainText(name)) {
         throw new IllegalArgumentException(
             "field name: found '"
@@ -198,7 +207,7 @@ public final class VtuWriter {
   private static List<VtkArray> toArrays(List<Field> fields) {
     List<VtkArray> arrays = new ArrayList<>();
     for (Field f : fields) {
-      arrays.add(VtkArray.float64(f.name(), f.components(), f.values()));
+      arrays.add(VtkArray.float64(f.name(), f.unit(), f.components(), f.values()));
     }
     return arrays;
   }

@@ -4,6 +4,7 @@ import static org.lwjgl.nuklear.Nuklear.*;
 
 import dev.soakfield.app.Annotations;
 import dev.soakfield.app.FaceGroupPalette;
+import dev.soakfield.app.FieldKind;
 import dev.soakfield.app.ProbeSelection;
 import dev.soakfield.app.Resample;
 import dev.soakfield.app.WorkbenchModel;
@@ -60,7 +61,9 @@ final class UptakePanel {
     }
     nk_layout_row_dynamic(ctx, 20, 1);
     nk_label(ctx, "Amount per part against time", NK_TEXT_LEFT);
-    AxesPlot.draw(ctx, 190, x, curves, colours, "time [" + axis.unit() + "]", "amount");
+    String amount = model.study().results().map(r -> r.units().amount()).orElse("c*m^3");
+    AxesPlot.draw(
+        ctx, 190, x, curves, colours, "time [" + axis.unit() + "]", "amount [" + amount + "]");
     nk_layout_row_dynamic(ctx, 18, 1);
     for (int i = 0; i < parts.size(); i++) {
       nk_label_colored(
@@ -109,7 +112,10 @@ final class UptakePanel {
           List.of(v),
           new int[] {0xe8c45a},
           "time [" + axis.unit() + "] (the frames)",
-          model.settings().field().map(k -> k.words).orElse("value"));
+          model.settings().field().map(k -> k.words).orElse("value")
+              + (model.settings().field().orElse(null) == FieldKind.CONCENTRATION
+                  ? " [" + r.units().concentration() + "]"
+                  : ""));
     }
   }
 
