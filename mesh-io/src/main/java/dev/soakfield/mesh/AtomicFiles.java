@@ -1,10 +1,12 @@
 package dev.soakfield.mesh;
 
 import java.io.IOException;
+import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
 import java.util.Set;
@@ -37,11 +39,33 @@ public final class AtomicFiles {
     Files.setPosixFilePermissions(tmp, perms);
   }
 
+  /** Forces a folder's entries (the rename) to the disk where the platform can. */
+  private static void forceFolder(Path dir) {
+    try (FileChannel c = FileChannel.open(dir, StandardOpenOption.READ)) {
+      c.force(true);
+    } catch (IOException | UnsupportedOperationException e) {
+      // some platforms cannot open a folder as a channel; the rename then is as durable as they are
+    }
+  }
+
   /**
    * Runs {@code writer} on a temporary file in the target's folder and renames the result onto
    * {@code target}. On failure the temporary file is removed and {@code target} is untouched.
    */
   public static void write(Path target, Writer writer) throws IOException {
+    write(target, writer, false);
+  }
+
+  /**
+   * As {@link #write(Path, Writer)}, and durable: the content is forced to the disk before the
+   * rename and the folder after it, so that after a power cut the target is the old file or the
+   * complete new one (what a checkpoint needs; a plain rename may reach the disk before the data).
+   */
+  public static void writeDurably(Path target, Writer writer) throws IOException {
+    write(target, writer, true);
+  }
+
+  private static void write(Path target, Writer writer, boolean durable) throws IOException {
     Path abs = target.toAbsolutePath();
     Path dir = abs.getParent();
     if (dir != null) {
@@ -52,12 +76,20 @@ public final class AtomicFiles {
     try {
       writer.writeTo(tmp);
       keepPermissions(tmp, abs);
+      if (durable) {
+        try (FileChannel c = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
+          c.force(true);
+        }
+      }
       try {
         Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
       } catch (AtomicMoveNotSupportedException e) {
         Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
       }
       done = true;
+      if (durable && dir != null) {
+        forceFolder(dir);
+      }
     } finally {
       if (!done) {
         Files.deleteIfExists(tmp);

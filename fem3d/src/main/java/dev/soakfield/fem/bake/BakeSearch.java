@@ -189,7 +189,8 @@ public final class BakeSearch {
             old.capacity(),
             steps,
             stop,
-            old.balanceLimit());
+            old.balanceLimit(),
+            old.maxSteps());
     return new RunPipeline.Prepared(
         spec.withEnvironment(Optional.of(oneSegment), time), base.mesh(), base.warnings());
   }

@@ -12,8 +12,6 @@ final class TimeBinder {
    * The most fixed steps a case may ask for: 10⁷ steps write a series of about a gigabyte and
    * mostly mean a unit slip (a step in s meant in h), not a wish.
    */
-  static final long MAX_FIXED_STEPS = 10_000_000;
-
   private static final Set<String> KEYS =
       Set.of(
           "end",
@@ -25,7 +23,9 @@ final class TimeBinder {
           "initial_step",
           "max_step",
           "stop",
-          "balance_limit");
+          "balance_limit",
+          "max_steps");
+
   private static final String SECONDS = "a positive duration (seconds, or with a unit: \"168 h\")";
 
   private final CaseFields fields;
@@ -85,22 +85,38 @@ final class TimeBinder {
         CaseFields.optional(obj, "stop")
             .map(n -> stop(n, CasePaths.child(path, "stop")).map(Optional::of))
             .orElse(Optional.of(Optional.empty()));
+    long maxSteps = TimeSpec.DEFAULT_MAX_STEPS;
+    boolean maxStepsOk = true;
+    Optional<CaseNode> maxNode = CaseFields.optional(obj, "max_steps");
+    if (maxNode.isPresent()) {
+      String maxPath = CasePaths.child(path, "max_steps");
+      OptionalDouble m = fields.number(maxNode.get(), maxPath, "a whole number of steps ≥ 1");
+      maxStepsOk =
+          m.isPresent()
+              && m.getAsDouble() >= 1
+              && m.getAsDouble() <= 1e15
+              && m.getAsDouble() == Math.rint(m.getAsDouble());
+      if (m.isPresent() && !maxStepsOk) {
+        fields.problems().found(maxNode.get(), maxPath, "a whole number of steps from 1 to 1e15");
+      }
+      maxSteps = maxStepsOk ? (long) m.getAsDouble() : maxSteps;
+    }
     if (end.isPresent()
         && steps.isPresent()
         && steps.get() instanceof StepControl.Fixed fixed
-        && !(end.getAsDouble() / fixed.step() <= MAX_FIXED_STEPS)) {
+        && !(end.getAsDouble() / fixed.step() <= maxSteps)) {
       fields
           .problems()
           .found(
               obj.members().get("step").value(),
               CasePaths.child(path, "step"),
               "a step giving at most "
-                  + MAX_FIXED_STEPS
+                  + maxSteps
                   + " steps up to the end ("
                   + CaseFields.plain(end.getAsDouble())
                   + " s needs "
                   + String.format(java.util.Locale.ROOT, "%.3g", end.getAsDouble() / fixed.step())
-                  + "); take a longer step or adaptive steps");
+                  + "); take a longer step or adaptive steps, or raise time.max_steps");
       steps = Optional.empty();
     }
     OptionalDouble limit = OptionalDouble.of(TimeSpec.DEFAULT_BALANCE_LIMIT);
@@ -114,6 +130,7 @@ final class TimeBinder {
       }
     }
     if (stop.isEmpty()
+        || !maxStepsOk
         || limit.isEmpty()
         || end.isEmpty()
         || outputs.isEmpty()
@@ -130,7 +147,8 @@ final class TimeBinder {
             capacity.get(),
             steps.get(),
             stop.get(),
-            limit.getAsDouble()));
+            limit.getAsDouble(),
+            maxSteps));
   }
 
   private Optional<StopSpec> stop(CaseNode node, String path) {

@@ -14,6 +14,8 @@ import java.util.Optional;
  * @param steps adaptive or fixed steps
  * @param stop a condition that ends the run early, when given
  * @param balanceLimit the largest relative balance error a finished run may have
+ * @param maxSteps the most time steps a run may take (fixed steps are checked before the run,
+ *     adaptive ones as it goes)
  */
 public record TimeSpec(
     double end,
@@ -22,9 +24,28 @@ public record TimeSpec(
     CapacityForm capacity,
     StepControl steps,
     Optional<StopSpec> stop,
-    double balanceLimit) {
+    double balanceLimit,
+    long maxSteps) {
   /** The balance limit when the case gives none. */
   public static final double DEFAULT_BALANCE_LIMIT = 1e-8;
+
+  /**
+   * The step limit when the case gives none: ten million steps (a series of about 2 GB), far more
+   * than a well-posed run takes.
+   */
+  public static final long DEFAULT_MAX_STEPS = 10_000_000;
+
+  /** Time control with the default step limit. */
+  public TimeSpec(
+      double end,
+      List<Double> outputs,
+      TimeScheme scheme,
+      CapacityForm capacity,
+      StepControl steps,
+      Optional<StopSpec> stop,
+      double balanceLimit) {
+    this(end, outputs, scheme, capacity, steps, stop, balanceLimit, DEFAULT_MAX_STEPS);
+  }
 
   public TimeSpec {
     outputs = List.copyOf(outputs);
@@ -37,6 +58,9 @@ public record TimeSpec(
     }
     if (!(balanceLimit > 0 && balanceLimit <= 1)) {
       throw new IllegalArgumentException("balance limit must lie in (0, 1], got " + balanceLimit);
+    }
+    if (maxSteps < 1) {
+      throw new IllegalArgumentException("max steps must be at least 1, got " + maxSteps);
     }
   }
 

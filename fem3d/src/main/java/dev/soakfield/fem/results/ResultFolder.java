@@ -167,7 +167,7 @@ public final class ResultFolder {
       return;
     }
     try (Stream<Path> s = Files.list(abs)) {
-      if (s.findAny().isPresent()) {
+      if (s.anyMatch(p -> !p.getFileName().toString().equals(FolderLock.NAME))) {
         throw new ResultFolderException(
             abs
                 + ": found a folder that is not empty and holds no "

@@ -1,26 +1,27 @@
 package dev.soakfield.fem.results;
 
 import dev.soakfield.mesh.AtomicFiles;
-import java.io.BufferedInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.DataInputStream;
 import java.io.DataOutputStream;
 import java.io.EOFException;
 import java.io.IOException;
-import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.zip.CRC32;
 
 /**
- * Named arrays of numbers and named texts in one small binary file of our own, written atomically:
- * the container of checkpoints. Layout (big-endian): magic "SOAKBNDL", version, the count of
- * arrays, each as name (UTF) + length + doubles, then the count of texts, each as name + text.
+ * Named arrays of numbers and named texts in one small binary file of our own, written atomically
+ * and durably (forced to the disk before and after the rename): the container of checkpoints.
+ * Layout (big-endian): magic "SOAKBNDL", version, the count of arrays, each as name (UTF) + length
+ * + doubles, then the count of texts, each as name + text, then a CRC-32 of everything before it,
+ * so that a flipped bit is found instead of resumed from.
  */
 public final class StateBundle {
   private static final long MAGIC = 0x534F414B424E444CL; // "SOAKBNDL"
-  private static final int VERSION = 1;
+  private static final int VERSION = 2;
 
   private final Map<String, double[]> arrays = new LinkedHashMap<>();
   private final Map<String, String> texts = new LinkedHashMap<>();
@@ -83,8 +84,12 @@ public final class StateBundle {
         out.writeUTF(e.getValue());
       }
     }
-    byte[] data = bytes.toByteArray();
-    AtomicFiles.write(file, tmp -> Files.write(tmp, data));
+    byte[] payload = bytes.toByteArray();
+    CRC32 crc = new CRC32();
+    crc.update(payload);
+    byte[] data = java.util.Arrays.copyOf(payload, payload.length + Long.BYTES);
+    java.nio.ByteBuffer.wrap(data, payload.length, Long.BYTES).putLong(crc.getValue());
+    AtomicFiles.writeDurably(file, tmp -> Files.write(tmp, data));
   }
 
   /**
@@ -94,10 +99,21 @@ public final class StateBundle {
    */
   public static StateBundle read(Path file) throws IOException {
     StateBundle b = new StateBundle();
-    try (InputStream raw = Files.newInputStream(file);
-        DataInputStream in = new DataInputStream(new BufferedInputStream(raw))) {
+    byte[] all = Files.readAllBytes(file);
+    if (all.length < 2 * Long.BYTES) {
+      throw new IOException(file + ": damaged checkpoint (" + all.length + " bytes)");
+    }
+    int payload = all.length - Long.BYTES;
+    CRC32 crc = new CRC32();
+    crc.update(all, 0, payload);
+    long stored = java.nio.ByteBuffer.wrap(all, payload, Long.BYTES).getLong();
+    try (DataInputStream in =
+        new DataInputStream(new java.io.ByteArrayInputStream(all, 0, payload))) {
       if (in.readLong() != MAGIC || in.readInt() != VERSION) {
         throw new IOException(file + ": not a Soakfield checkpoint of this version");
+      }
+      if (stored != crc.getValue()) {
+        throw new IOException(file + ": damaged checkpoint (its checksum does not match)");
       }
       int n = in.readInt();
       for (int k = 0; k < n; k++) {

@@ -10,6 +10,7 @@ import dev.soakfield.fem.model.DiffusionModel;
 import dev.soakfield.fem.model.ImpermeableParts;
 import dev.soakfield.fem.model.LawResolver;
 import dev.soakfield.fem.model.ModelBuilder;
+import dev.soakfield.fem.results.FolderLock;
 import dev.soakfield.fem.results.ResultFiles;
 import dev.soakfield.fem.results.ResultFolder;
 import dev.soakfield.fem.results.ResultFolderException;
@@ -131,15 +132,34 @@ public final class RunPipeline {
     return run(prepare(caseFile), outDir, progress, options);
   }
 
-  /** Runs a case already read and checked (see {@link #prepare}). */
+  /**
+   * Runs a case already read and checked (see {@link #prepare}), holding the folder's lock ({@link
+   * FolderLock}) while it writes there.
+   */
   public static RunSummary run(
       Prepared prepared, Path outDir, RunProgress progress, RunOptions options) throws IOException {
+    TetMesh mesh = prepared.mesh();
+    MemoryEstimate memory = MemoryEstimate.of(mesh, mesh.order());
+    memory.requireHeap(options.maxHeap()); // refused before anything is written
+    FolderLock lock = FolderLock.take(outDir);
+    try {
+      return runLocked(prepared, outDir, progress, options, memory);
+    } finally {
+      lock.close(); // also when the run fails: the folder is free for the next one
+    }
+  }
+
+  private static RunSummary runLocked(
+      Prepared prepared,
+      Path outDir,
+      RunProgress progress,
+      RunOptions options,
+      MemoryEstimate memory)
+      throws IOException {
     Path caseFile = prepared.spec().caseFile();
     LawResolver laws = options.laws();
     CaseSpec spec = prepared.spec();
     TetMesh mesh = prepared.mesh();
-    MemoryEstimate memory = MemoryEstimate.of(mesh, mesh.order());
-    memory.requireHeap(options.maxHeap());
     List<String> warnings = new ArrayList<>(prepared.warnings());
     DiffusionModel model = ModelBuilder.build(spec, mesh, warnings, laws);
     boolean lumped = spec.time().capacity() == CapacityForm.LUMPED;
@@ -259,8 +279,15 @@ public final class RunPipeline {
     }
   }
 
-  private static StateBundle readCheckpoint(Path file, String fingerprint) throws IOException {
-    StateBundle b = StateBundle.read(file);
+  private static StateBundle readCheckpoint(Path file, String fingerprint) {
+    StateBundle b;
+    try {
+      b = StateBundle.read(file);
+    } catch (IOException e) {
+      throw new ResultFolderException(
+          e.getMessage() + "; this run cannot go on from it: run without --resume to start afresh",
+          e);
+    }
     if (!b.text("fingerprint").equals(fingerprint)) {
       throw new ResultFolderException(
           file + ": found the checkpoint of another case or mesh, expected one of this run");

@@ -179,6 +179,20 @@ final class RunRecorder implements StepListener, AutoCloseable {
         writeFrame(t, phi);
       }
       steps++;
+      if (steps >= spec.time().maxSteps() && t < end) {
+        throw new dev.soakfield.fem.time.RunFailedException(
+            t,
+            "the run took "
+                + steps
+                + " steps and reached only t = "
+                + t
+                + " s of "
+                + end
+                + " s; the steps are too small for the time asked (an error tolerance too"
+                + " tight, a step too short, an end too far) — loosen them, or raise"
+                + " time.max_steps if this is meant",
+            null);
+      }
       progress.step(t, end, steps, 0);
     } catch (IOException e) {
       throw new UncheckedIOException(e);

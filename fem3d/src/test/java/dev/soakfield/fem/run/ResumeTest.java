@@ -98,6 +98,34 @@ class ResumeTest {
     interruptedThenResumed("\"end\": 8000, \"tolerance\": 1e-3", 11);
   }
 
+  /**
+   * A checkpoint with one flipped bit, or cut short, is refused with the way out, never resumed
+   * into another series (the resume tests above are the control: an intact one goes on).
+   */
+  @Test
+  void aDamagedCheckpointIsRefusedNotResumed() throws IOException {
+    Path c = caseFile("\"end\": 8000, \"step\": 50");
+    RunOptions options = RunOptions.defaults().withCheckpoints(5, 0);
+    for (String damage : new String[] {"flip", "cut"}) {
+      Path out = dir.resolve("damaged-" + damage);
+      assertThrows(Killed.class, () -> RunPipeline.run(c, out, killAt(40), options));
+      Path checkpoint = out.resolve(Checkpointer.NAME);
+      byte[] bytes = Files.readAllBytes(checkpoint);
+      if (damage.equals("flip")) {
+        bytes[bytes.length / 2] ^= 0x10; // one bit in the middle of the numbers
+      } else {
+        bytes = java.util.Arrays.copyOf(bytes, bytes.length / 3);
+      }
+      Files.write(checkpoint, bytes);
+      ResultFolderException e =
+          assertThrows(
+              ResultFolderException.class,
+              () -> RunPipeline.run(c, out, RunProgress.SILENT, options.withResume(true)));
+      assertTrue(e.getMessage().contains("damaged checkpoint"), e.getMessage());
+      assertTrue(e.getMessage().contains("without --resume"), e.getMessage());
+    }
+  }
+
   @Test
   void aFinishedRunHasNothingToResume() throws IOException {
     Path c = caseFile("\"end\": 8000, \"step\": 400");
