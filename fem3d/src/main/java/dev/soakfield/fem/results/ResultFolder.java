@@ -209,9 +209,36 @@ public final class ResultFolder {
 
   /** Moves every staged file into place and marks the run finished. */
   public void finish() {
+    finish(Completion.NONE);
+  }
+
+  /**
+   * What is made of a run's results in its folder before the folder says finished: the report and
+   * pictures. It gets the folder (all result files in place, the manifest still saying running) and
+   * the manifest the folder is about to get, and returns the names of the files it wrote.
+   */
+  @FunctionalInterface
+  public interface Completion {
+    Completion NONE = (folder, finished) -> List.of();
+
+    List<String> complete(Path folder, RunManifest finished) throws IOException;
+  }
+
+  /**
+   * Moves the results into place, lets {@code completion} make the report of them, and only then
+   * writes the manifest that says finished: a run killed before that says running, not finished
+   * without its report.
+   */
+  public void finish(Completion completion) {
     try {
-      List<String> files = moveStaged();
+      List<String> files = new ArrayList<>(moveStaged());
       dropEarlier(files);
+      RunManifest finished = manifest.ended(RunManifest.Status.FINISHED, Optional.empty(), files);
+      for (String f : completion.complete(target, finished)) {
+        if (!files.contains(f)) {
+          files.add(f);
+        }
+      }
       manifest = manifest.ended(RunManifest.Status.FINISHED, Optional.empty(), files);
       manifest.writeTo(target);
     } catch (IOException e) {

@@ -1,6 +1,7 @@
 package dev.soakfield.fem.run;
 
 import dev.soakfield.fem.model.LawResolver;
+import dev.soakfield.fem.results.ResultFolder;
 import java.util.Objects;
 
 /**
@@ -14,6 +15,8 @@ import java.util.Objects;
  * @param checkpointSteps save a checkpoint every so many accepted steps (0: not by steps)
  * @param checkpointSeconds save a checkpoint when this much wall time passed (0: not by time)
  * @param resume go on from the checkpoint of an interrupted run in the output folder
+ * @param completion what is made of the results before the folder says finished (the report and its
+ *     pictures), so that "finished" means all of it is there
  */
 public record RunOptions(
     boolean force,
@@ -22,7 +25,8 @@ public record RunOptions(
     LawResolver laws,
     int checkpointSteps,
     double checkpointSeconds,
-    boolean resume) {
+    boolean resume,
+    ResultFolder.Completion completion) {
   /** Checkpoints by default: every 500 steps or 60 s of wall time, whichever comes first. */
   public static final int DEFAULT_CHECKPOINT_STEPS = 500;
 
@@ -31,6 +35,7 @@ public record RunOptions(
   public RunOptions {
     Objects.requireNonNull(toolVersion, "toolVersion");
     Objects.requireNonNull(laws, "laws");
+    Objects.requireNonNull(completion, "completion");
     if (checkpointSteps < 0 || !(checkpointSeconds >= 0)) {
       throw new IllegalArgumentException("checkpoint intervals must not be negative");
     }
@@ -39,18 +44,18 @@ public record RunOptions(
   /** These options with {@code laws}. */
   public RunOptions withLaws(LawResolver laws) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume);
+        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
   }
 
   /** These options with {@code resume}. */
   public RunOptions withResume(boolean resume) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume);
+        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
   }
 
   /** These options with checkpoint intervals. */
   public RunOptions withCheckpoints(int steps, double seconds) {
-    return new RunOptions(force, toolVersion, maxHeap, laws, steps, seconds, resume);
+    return new RunOptions(force, toolVersion, maxHeap, laws, steps, seconds, resume, completion);
   }
 
   /** No force, this JVM's heap, the version of the fem3d package (or "development build"). */
@@ -63,24 +68,31 @@ public record RunOptions(
         LawResolver.none(),
         DEFAULT_CHECKPOINT_STEPS,
         DEFAULT_CHECKPOINT_SECONDS,
-        false);
+        false,
+        ResultFolder.Completion.NONE);
   }
 
   /** These options with {@code force}. */
   public RunOptions withForce(boolean force) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume);
+        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
   }
 
   /** These options with {@code version}. */
   public RunOptions withToolVersion(String version) {
     return new RunOptions(
-        force, version, maxHeap, laws, checkpointSteps, checkpointSeconds, resume);
+        force, version, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
+  }
+
+  /** These options with {@code completion} run before the folder says finished. */
+  public RunOptions withCompletion(ResultFolder.Completion completion) {
+    return new RunOptions(
+        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
   }
 
   /** These options with {@code maxHeap}. */
   public RunOptions withMaxHeap(long maxHeap) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume);
+        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
   }
 }

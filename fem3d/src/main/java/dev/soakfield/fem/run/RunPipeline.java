@@ -267,7 +267,7 @@ public final class RunPipeline {
               log.elapsedSeconds(),
               recorder.balanceRelative()));
       log.close();
-      folder.finish();
+      folder.finish(options.completion());
       Files.deleteIfExists(checkpoint); // the results are complete: nothing left to resume
       return new RunSummary(
           folder.target(),

@@ -11,6 +11,7 @@ import dev.soakfield.report.ReportWriter;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.Optional;
+import java.util.concurrent.atomic.AtomicReference;
 
 /**
  * A whole analysis of a case, as the command line and the window run it: the run, then the field
@@ -36,15 +37,21 @@ public final class CaseRun {
   public static Outcome run(Path caseFile, Path out, RunProgress progress, RunOptions options)
       throws IOException {
     RunSummary s;
+    AtomicReference<Optional<String>> noPictures = new AtomicReference<>(Optional.empty());
+    // pictures and report are made before the folder says finished (see ResultFolder.finish)
+    RunOptions reported =
+        options.withCompletion(
+            (folder, finished) -> {
+              noPictures.set(FieldPictures.draw(folder));
+              return ReportWriter.writeFiles(folder, finished);
+            });
     try {
-      s = RunPipeline.run(caseFile, out, progress, options);
+      s = RunPipeline.run(caseFile, out, progress, reported);
     } catch (RunFailedException | SolverStalledException e) {
       // the folder says "failed" and holds what was complete: a report of that part helps
       ReportWriter.write(out);
       throw e;
     }
-    Optional<String> noPictures = FieldPictures.draw(s.outputFolder());
-    ReportWriter.write(s.outputFolder());
-    return new Outcome(s, noPictures);
+    return new Outcome(s, noPictures.get());
   }
 }

@@ -74,6 +74,19 @@ public final class ReportWriter {
   }
 
   private static List<String> write(Path folder, RunManifest manifest) throws IOException {
+    List<String> written = writeFiles(folder, manifest);
+    manifest.withFiles(written).writeTo(folder);
+    return written;
+  }
+
+  /**
+   * Writes the report of the results in {@code folder} as {@code manifest} describes them (the
+   * manifest the folder is about to get), without touching the folder's manifest: the completion
+   * step of a run, after which the run's folder says finished.
+   *
+   * @return the files written, relative to the folder
+   */
+  public static List<String> writeFiles(Path folder, RunManifest manifest) throws IOException {
     ReportDocument doc = build(folder, manifest);
     List<String> written = new ArrayList<>();
     for (String png : doc.pictureFiles()) {
@@ -89,7 +102,6 @@ public final class ReportWriter {
         folder.resolve(MARKDOWN), f -> Files.writeString(f, md, StandardCharsets.UTF_8));
     written.add(HTML);
     written.add(MARKDOWN);
-    manifest.withFiles(written).writeTo(folder);
     return written;
   }
 

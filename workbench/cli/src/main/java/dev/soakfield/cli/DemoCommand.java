@@ -1,9 +1,9 @@
 package dev.soakfield.cli;
 
+import dev.soakfield.app.CaseRun;
 import dev.soakfield.fem.results.ResultFiles;
-import dev.soakfield.fem.run.RunPipeline;
+import dev.soakfield.fem.run.RunOptions;
 import dev.soakfield.fem.run.RunSummary;
-import dev.soakfield.report.ReportWriter;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -39,9 +39,9 @@ final class DemoCommand implements Callable<Integer> {
     o.println("demo case: " + demoCase);
     o.flush();
     ProgressLine progress = new ProgressLine(spec.commandLine().getErr(), false);
-    RunSummary s = RunPipeline.run(demoCase, out.resolve("results"), progress);
+    RunSummary s =
+        CaseRun.run(demoCase, out.resolve("results"), progress, RunOptions.defaults()).summary();
     progress.done();
-    ReportWriter.write(s.outputFolder());
     RunCommand.report(o, s);
     o.println("open " + s.outputFolder().resolve(ResultFiles.FIELDS) + " in a VTK viewer, or read");
     o.println(
