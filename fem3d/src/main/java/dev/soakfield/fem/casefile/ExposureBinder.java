@@ -136,6 +136,21 @@ final class ExposureBinder {
       }
     }
     double end = t + duration.getAsDouble();
+    if (!(end > t) || Double.isInfinite(end)) {
+      // a duration too small to move the clock on at this time (or one that overflows it)
+      fields
+          .problems()
+          .found(
+              obj.members().get("duration").value(),
+              dPath,
+              String.format(
+                  java.util.Locale.ROOT,
+                  "a duration that moves the history on from t = %.6g s (at least %.3g s)",
+                  t,
+                  Math.ulp(t) * 2));
+      ok = false;
+      return;
+    }
     out.add(
         new Segment(
             t,

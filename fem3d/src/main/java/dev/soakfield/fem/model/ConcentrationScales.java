@@ -25,6 +25,22 @@ final class ConcentrationScales {
     for (int g = 0; g < f.length; g++) {
       MaterialSpec m = spec.materials().get(mesh.volumeGroups().get(g).name());
       f[g] = m == null ? 1.0 : spec.quantities().perPart(m.density().orElse(Double.NaN));
+      if (!(f[g] > 0) || Double.isInfinite(f[g])) {
+        String path = "materials." + mesh.volumeGroups().get(g).name() + ".density";
+        SourcePlace at = spec.placeOf(path);
+        throw new CaseInputException(
+            String.valueOf(spec.caseFile().getFileName()),
+            List.of(
+                new CaseInputException.Problem(
+                    at.line(),
+                    at.column(),
+                    path,
+                    "found a density that turns "
+                        + spec.quantities().concentration()
+                        + " into "
+                        + f[g]
+                        + " per m³, expected a density of a real material (\"7850 kg/m^3\")")));
+      }
     }
     return f;
   }
