@@ -26,20 +26,14 @@ final class ConcentrationScales {
       MaterialSpec m = spec.materials().get(mesh.volumeGroups().get(g).name());
       f[g] = m == null ? 1.0 : spec.quantities().perPart(m.density().orElse(Double.NaN));
       if (!(f[g] > 0) || Double.isInfinite(f[g])) {
-        String path = "materials." + mesh.volumeGroups().get(g).name() + ".density";
-        SourcePlace at = spec.placeOf(path);
-        throw new CaseInputException(
-            String.valueOf(spec.caseFile().getFileName()),
-            List.of(
-                new CaseInputException.Problem(
-                    at.line(),
-                    at.column(),
-                    path,
-                    "found a density that turns "
-                        + spec.quantities().concentration()
-                        + " into "
-                        + f[g]
-                        + " per m³, expected a density of a real material (\"7850 kg/m^3\")")));
+        throw problem(
+            spec,
+            "materials." + mesh.volumeGroups().get(g).name() + ".density",
+            "found a density that turns "
+                + spec.quantities().concentration()
+                + " into "
+                + f[g]
+                + " per m³, expected a density of a real material (\"7850 kg/m^3\")");
       }
     }
     return f;
@@ -77,27 +71,29 @@ final class ConcentrationScales {
     double f = ownerScales.length == 0 ? 1.0 : ownerScales[0];
     for (double o : ownerScales) {
       if (o != f) {
-        String path = "faces." + face.faceGroup();
-        SourcePlace at = spec.placeOf(path);
-        throw new CaseInputException(
-            String.valueOf(spec.caseFile().getFileName()),
-            List.of(
-                new CaseInputException.Problem(
-                    at.line(),
-                    at.column(),
-                    path,
-                    String.format(
-                        Locale.ROOT,
-                        "found a concentration in %s on faces of parts with different densities"
-                            + " (%.4g and %.4g amount per m³ per %s), expected one part per face"
-                            + " group: split the group by part, or declare a volumetric unit",
-                        spec.quantities().concentration(),
-                        f,
-                        o,
-                        spec.quantities().concentration()))));
+        throw problem(
+            spec,
+            "faces." + face.faceGroup(),
+            String.format(
+                Locale.ROOT,
+                "found a concentration in %s on faces of parts with different densities"
+                    + " (%.4g and %.4g amount per m³ per %s), expected one part per face"
+                    + " group: split the group by part, or declare a volumetric unit",
+                spec.quantities().concentration(),
+                f,
+                o,
+                spec.quantities().concentration()));
       }
     }
     return f == 1.0 ? declared : scaled(declared, f);
+  }
+
+  /** A problem at {@code path} of the case, where the file has it. */
+  private static CaseInputException problem(CaseSpec spec, String path, String message) {
+    SourcePlace at = spec.placeOf(path);
+    return new CaseInputException(
+        String.valueOf(spec.caseFile().getFileName()),
+        List.of(new CaseInputException.Problem(at.line(), at.column(), path, message)));
   }
 
   private static TimeFunction scaled(TimeFunction declared, double f) {

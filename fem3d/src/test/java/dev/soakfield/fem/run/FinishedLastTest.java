@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.soakfield.fem.results.RunManifest;
-import dev.soakfield.mesh.gen.StructuredMesher;
-import dev.soakfield.mesh.msh.MshWriter;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -27,15 +25,7 @@ class FinishedLastTest {
   }
 
   private Path caseFile() throws IOException {
-    MshWriter.write(
-        dir.resolve("box.msh"), StructuredMesher.box(1e-3, 1e-3, 1e-3, 2, 2, 2, 1), false);
-    return Files.writeString(
-        dir.resolve("box.json"),
-        """
-        { "mesh": "box.msh", "materials": { "body": { "diffusivity": 1e-10 } },
-          "faces": { "zmax": { "kind": "concentration", "value": 1 } },
-          "time": { "end": 100, "step": 10 } }
-        """);
+    return BoxCase.write(dir, "{ \"end\": 100, \"step\": 10 }");
   }
 
   @Test

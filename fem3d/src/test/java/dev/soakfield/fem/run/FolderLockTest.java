@@ -7,8 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.soakfield.fem.results.FolderLock;
 import dev.soakfield.fem.results.ResultFolderException;
 import dev.soakfield.fem.results.RunManifest;
-import dev.soakfield.mesh.gen.StructuredMesher;
-import dev.soakfield.mesh.msh.MshWriter;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -20,15 +18,7 @@ class FolderLockTest {
   @TempDir Path dir;
 
   private Path caseFile() throws IOException {
-    MshWriter.write(
-        dir.resolve("box.msh"), StructuredMesher.box(1e-3, 1e-3, 1e-3, 2, 2, 2, 1), false);
-    return Files.writeString(
-        dir.resolve("box.json"),
-        """
-        { "mesh": "box.msh", "materials": { "body": { "diffusivity": 1e-10 } },
-          "faces": { "zmax": { "kind": "concentration", "value": 1 } },
-          "time": { "end": 100, "step": 10 } }
-        """);
+    return BoxCase.write(dir, "{ \"end\": 100, \"step\": 10 }");
   }
 
   @Test

@@ -7,10 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.soakfield.fem.casefile.CaseInputException;
 import dev.soakfield.fem.results.RunManifest;
 import dev.soakfield.fem.time.RunFailedException;
-import dev.soakfield.mesh.gen.StructuredMesher;
-import dev.soakfield.mesh.msh.MshWriter;
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -20,16 +17,7 @@ class StepLimitTest {
   @TempDir Path dir;
 
   private Path caseWith(String time) throws IOException {
-    MshWriter.write(
-        dir.resolve("box.msh"), StructuredMesher.box(1e-3, 1e-3, 1e-3, 2, 2, 2, 1), false);
-    return Files.writeString(
-        dir.resolve("box.json"),
-        """
-        { "mesh": "box.msh", "materials": { "body": { "diffusivity": 1e-10 } },
-          "faces": { "zmax": { "kind": "concentration", "value": 1 } },
-          "time": %s }
-        """
-            .formatted(time));
+    return BoxCase.write(dir, time);
   }
 
   @Test

@@ -60,4 +60,20 @@ final class ShapeGuard {
     int along = Math.max(counts[2], (int) Math.ceil(height / longest));
     return new int[] {radial, around, along};
   }
+
+  /**
+   * Applies {@code step} to the counts until they stop changing (raising one count changes the
+   * sizes another is held to), at most a few times.
+   */
+  static int[] settle(int[] given, java.util.function.UnaryOperator<int[]> step) {
+    int[] n = given;
+    for (int pass = 0; pass < 8; pass++) {
+      int[] next = step.apply(n);
+      if (java.util.Arrays.equals(next, n)) {
+        break;
+      }
+      n = next;
+    }
+    return n;
+  }
 }

@@ -313,30 +313,26 @@ public final class StructuredMesher {
     if (asGiven) {
       return n;
     }
-    for (int pass = 0; pass < 8; pass++) {
-      double s = RoundGrid.squareHalfSide(radius, n[0], n[1]);
-      double[] w = Grading.planes(0, 1, n[0], 1, grading.at("side"));
-      double[] sizes = new double[n[0] + 1];
-      for (int i = 0; i < n[0]; i++) {
-        sizes[i] = (w[i + 1] - w[i]) * (radius - s);
-      }
-      sizes[n[0]] = 2 * s / (n[1] / 4.0); // the central square's cells
-      int[] next =
-          ShapeGuard.counts(
+    return ShapeGuard.settle(
+        n,
+        c -> {
+          double s = RoundGrid.squareHalfSide(radius, c[0], c[1]);
+          double[] w = Grading.planes(0, 1, c[0], 1, grading.at("side"));
+          double[] sizes = new double[c[0] + 1];
+          for (int i = 0; i < c[0]; i++) {
+            sizes[i] = (w[i + 1] - w[i]) * (radius - s);
+          }
+          sizes[c[0]] = 2 * s / (c[1] / 4.0); // the central square's cells
+          return ShapeGuard.counts(
               sizes,
               8 * s,
               2 * Math.PI * radius,
               height,
-              n,
+              c,
               4,
               grading.at("side") != 1,
               ShapeGuard.SKEWED_ASPECT);
-      if (java.util.Arrays.equals(next, n)) {
-        break;
-      }
-      n = next;
-    }
-    return n;
+        });
   }
 
   /**
@@ -413,34 +409,30 @@ public final class StructuredMesher {
     if (asGiven) {
       return n;
     }
-    for (int pass = 0; pass < 8; pass++) {
-      double[] r =
-          Grading.planes(
-              innerRadius,
-              outerRadius - innerRadius,
-              n[0],
-              grading.at("inner"),
-              grading.at("outer"));
-      double[] sizes = new double[n[0]];
-      for (int i = 0; i < n[0]; i++) {
-        sizes[i] = r[i + 1] - r[i];
-      }
-      int[] next =
-          ShapeGuard.counts(
+    return ShapeGuard.settle(
+        n,
+        c -> {
+          double[] r =
+              Grading.planes(
+                  innerRadius,
+                  outerRadius - innerRadius,
+                  c[0],
+                  grading.at("inner"),
+                  grading.at("outer"));
+          double[] sizes = new double[c[0]];
+          for (int i = 0; i < c[0]; i++) {
+            sizes[i] = r[i + 1] - r[i];
+          }
+          return ShapeGuard.counts(
               sizes,
               2 * Math.PI * innerRadius,
               2 * Math.PI * outerRadius,
               height,
-              n,
+              c,
               1,
               grading.at("inner") != 1 || grading.at("outer") != 1,
               ShapeGuard.ASPECT);
-      if (java.util.Arrays.equals(next, n)) {
-        break;
-      }
-      n = next;
-    }
-    return n;
+        });
   }
 
   /**
