@@ -18,6 +18,7 @@ final class PhysicalNames {
         throw c.error(at, c.tokenAt(at), "a physical group dimension 0, 1, 2 or 3");
       }
       int tag = c.nextIntTag("physical tag");
+      int tagAt = c.tokenStartBefore();
       String name = c.nextQuoted("the name of a physical group");
       c.endOfLine("a physical name");
       if (name.isBlank()) {
@@ -25,10 +26,23 @@ final class PhysicalNames {
             MeshFinding.warning(
                 "msh-blank-physical-name",
                 "physical group " + tag + " of dimension " + dim + " has a blank name; ignored"));
-      } else if (dim == 3) {
-        raw.volumeNames.putIfAbsent(tag, name);
-      } else if (dim == 2) {
-        raw.surfaceNames.putIfAbsent(tag, name);
+      } else if (dim == 3 || dim == 2) {
+        // one tag, two names would leave the groups' meaning to the order of the lines
+        String before = (dim == 3 ? raw.volumeNames : raw.surfaceNames).putIfAbsent(tag, name);
+        if (before != null && !before.equals(name)) {
+          throw c.error(
+              tagAt,
+              "physical tag "
+                  + tag
+                  + " of dimension "
+                  + dim
+                  + " named '"
+                  + before
+                  + "' and again '"
+                  + name
+                  + "'",
+              "one name per physical tag");
+        }
       }
     }
     c.expectEnd("PhysicalNames");

@@ -53,6 +53,25 @@ class MshReaderErrorsTest {
   }
 
   @Test
+  void onePhysicalTagWithTwoNamesIsRefused() throws IOException {
+    String good = text("cube_p2_v41_ascii.msh");
+    String bad =
+        replaceOnce(
+            replaceOnce(good, "$PhysicalNames\n2\n", "$PhysicalNames\n3\n"),
+            "3 7 \"core\"\n",
+            "3 7 \"core\"\n3 7 \"shell\"\n");
+    MeshInputException e = fail(bad);
+    check(e, "line 7", "named 'core' and again 'shell'", "one name per physical tag");
+    // the same name twice says nothing new and is read as once (the control)
+    String twice =
+        replaceOnce(
+            replaceOnce(good, "$PhysicalNames\n2\n", "$PhysicalNames\n3\n"),
+            "3 7 \"core\"\n",
+            "3 7 \"core\"\n3 7 \"core\"\n");
+    MshReader.read(twice.getBytes(StandardCharsets.US_ASCII), "twice.msh");
+  }
+
+  @Test
   void unknownVersion() throws IOException {
     String bad = replaceOnce(text("cube_v22_ascii.msh"), "2.2 0 8", "3.0 0 8");
     MeshInputException e = fail(bad);

@@ -34,8 +34,8 @@ final class DemoCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws IOException {
-    Path demoCase = DemoFiles.copyInto(out.resolve("case"), false);
     PrintWriter o = spec.commandLine().getOut();
+    Path demoCase = DemoFiles.copyInto(out.resolve("case"), false, o::println);
     o.println("demo case: " + demoCase);
     o.flush();
     ProgressLine progress = new ProgressLine(spec.commandLine().getErr(), false);

@@ -124,6 +124,10 @@ class FitCommandTest {
     assertTrue(covers(j.get("diffusivity"), d), j.get("diffusivity").toString());
     assertTrue(covers(j.get("saturation"), 0.012), j.get("saturation").toString());
     assertEquals(dry, j.get("dryMass").asDouble(), 1e-12);
+    // the same drying data without --desorption: refused with the hint, not a negative gain
+    CliRun wrongWay = CliRun.of("fit", csv.toString(), "--thickness", "2 mm");
+    assertEquals(2, wrongWay.exitCode(), wrongWay.out());
+    assertTrue(wrongWay.err().contains("give --desorption"), wrongWay.err());
   }
 
   @Test

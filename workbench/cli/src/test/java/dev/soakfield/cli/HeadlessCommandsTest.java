@@ -86,6 +86,15 @@ class HeadlessCommandsTest {
     assertEquals(ExitCodes.OK, check.exitCode(), check.err());
     assertTrue(!check.out().contains("sealed by default"), check.out());
     assertTrue(DemoFiles.windowCopy().startsWith(System.getProperty("user.home")));
+    // the demo command restores the shipped case, moving the edited one aside, not over it
+    java.util.List<String> said = new java.util.ArrayList<>();
+    DemoFiles.copyInto(folder, false, said::add);
+    assertEquals(
+        edited, java.nio.file.Files.readString(folder.resolve("sensor-pod.case.json.edited")));
+    assertTrue(java.nio.file.Files.readString(demoCase).contains("\"threshold\": 0.5"));
+    assertEquals(1, said.size(), said.toString()); // only the changed file is moved aside
+    DemoFiles.copyInto(folder, false, said::add);
+    assertEquals(1, said.size(), "an unchanged copy is not moved again: " + said);
   }
 
   @Test

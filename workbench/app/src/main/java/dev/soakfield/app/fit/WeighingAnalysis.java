@@ -66,6 +66,19 @@ public final class WeighingAnalysis {
               + " s, expected a time at or after the start of exposure (0)");
     }
     UptakeFit.Result r = UptakeFit.fit(t, change, l, factor);
+    if (!(r.level().value() > 0)) {
+      // a negative "gain" is data of the other direction, not a result to report
+      throw new FitInputException(
+          data
+              + ": found the mass "
+              + (o.desorption() ? "rising" : "falling")
+              + " (a fitted change of "
+              + r.level().value()
+              + " kg), expected "
+              + (o.desorption()
+                  ? "a mass loss for --desorption; leave --desorption out for uptake data"
+                  : "a mass gain; for drying data give --desorption"));
+    }
     double dry;
     if (!o.desorption()) {
       dry = m0;
