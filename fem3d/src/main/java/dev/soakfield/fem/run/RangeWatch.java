@@ -6,7 +6,12 @@ import dev.soakfield.fem.model.MaterialBehaviour;
 import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.physics.TimeFunction;
 import dev.soakfield.fem.results.StateBundle;
+import dev.soakfield.mesh.TetMesh;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.TreeSet;
 
@@ -26,13 +31,17 @@ final class RangeWatch {
 
   private final double lo;
   private final double hi;
+  private final TetMesh mesh;
   private double worst; // largest excursion beyond [lo, hi], in potential
   private double worstTime = Double.NaN;
+  private int worstNode = -1;
   private boolean below;
+  private final List<Map<String, Object>> atOutputs = new ArrayList<>();
 
-  private RangeWatch(double lo, double hi) {
+  private RangeWatch(double lo, double hi, TetMesh mesh) {
     this.lo = lo;
     this.hi = hi;
+    this.mesh = mesh;
   }
 
   /** A watch for the model, or empty where the maximum principle does not bound its solution. */
@@ -67,7 +76,7 @@ final class RangeWatch {
         }
       }
     }
-    return Optional.of(new RangeWatch(lo, hi));
+    return Optional.of(new RangeWatch(lo, hi, model.space().mesh()));
   }
 
   /** The start, the end, every breakpoint and the midpoints between them (ambient values bend). */
@@ -92,21 +101,59 @@ final class RangeWatch {
     return all;
   }
 
-  void step(double t, double[] phi) {
-    for (double p : phi) {
+  /**
+   * Takes the step ending at {@code t}; at an output it also notes how many nodes are out of range
+   * and the farthest one, in concentration ({@code nodalS}·φ) and place.
+   */
+  void step(double t, double[] phi, boolean output, double[] nodalS) {
+    int outside = 0;
+    int far = -1;
+    double farthest = 0;
+    double span = span();
+    for (int i = 0; i < phi.length; i++) {
+      double p = phi[i];
       double out = p < lo ? lo - p : p > hi ? p - hi : 0;
+      if (out > ROUND_OFF * span) {
+        outside++;
+        if (out > farthest) {
+          farthest = out;
+          far = i;
+        }
+      }
       if (out > worst) {
         worst = out;
         worstTime = t;
+        worstNode = i;
         below = p < lo;
       }
     }
+    if (output && far >= 0) {
+      Map<String, Object> m = new LinkedHashMap<>();
+      m.put("time", t);
+      m.put("nodes_out_of_range", outside);
+      m.put("farthest", nodalS[far] * phi[far]);
+      m.put("at", place(far));
+      m.put("share_of_range", farthest / span);
+      atOutputs.add(m);
+    }
+  }
+
+  private double span() {
+    return hi - lo > 0 ? hi - lo : Math.max(Math.abs(hi), Double.MIN_NORMAL);
+  }
+
+  private double[] place(int node) {
+    return new double[] {mesh.coord(node, 0), mesh.coord(node, 1), mesh.coord(node, 2)};
+  }
+
+  /** Per output where nodes were out of range: time, count, farthest value and its place. */
+  List<Map<String, Object>> outputs() {
+    return List.copyOf(atOutputs);
   }
 
   /** The largest excursion as a share of the range (of hi where the range is a single value). */
   double excursion() {
-    double span = hi - lo > 0 ? hi - lo : Math.max(Math.abs(hi), Double.MIN_NORMAL);
-    return worst / span;
+    return worst / span();
   }
 
   /** The warning to give, empty when the solution stayed in range. */
@@ -119,11 +166,15 @@ final class RangeWatch {
             Locale.ROOT,
             "the solution left the range the data allow (no sources: it must stay between the"
                 + " start state and the faces' values) by up to %.3g %% of that range, %s it, at"
-                + " t = %.6g s%s. This is the %s capacity's overshoot at a step change next to a"
-                + " held face, an artefact of the time step and mesh near it; %s",
+                + " t = %.6g s at (%.4g, %.4g, %.4g) m%s (summary.json's range_excursions lists"
+                + " every output where it did). This is the %s capacity's overshoot at a step"
+                + " change next to a held face, an artefact of the time step and mesh near it; %s",
             100 * excursion(),
             below ? "below" : "above",
             worstTime,
+            place(worstNode)[0],
+            place(worstNode)[1],
+            place(worstNode)[2],
             below && lo == 0 ? " (a negative concentration)" : "",
             lumped ? "lumped" : "consistent",
             lumped
@@ -133,7 +184,7 @@ final class RangeWatch {
   }
 
   void snapshot(StateBundle b) {
-    b.put("rec.range", worst, worstTime, below ? 1 : 0);
+    b.put("rec.range", worst, worstTime, below ? 1 : 0, worstNode);
   }
 
   void restore(StateBundle b) {
@@ -142,6 +193,7 @@ final class RangeWatch {
       worst = r[0];
       worstTime = r[1];
       below = r[2] != 0;
+      worstNode = r.length > 3 ? (int) r[3] : worstNode;
     }
   }
 }

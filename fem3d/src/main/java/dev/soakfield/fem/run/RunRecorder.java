@@ -173,7 +173,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
       clock.step(t, dt, phi);
       probes.step(t, dt, phi, shownS);
       watch.step(reading(t, phi));
-      range.ifPresent(r -> r.step(t, phi));
+      range.ifPresent(r -> r.step(t, phi, output, nodalS));
       series.row(rows.row(figures(t, dt, phi, inflow, maxima)));
       if (output) {
         writeFrame(t, phi);
@@ -344,7 +344,16 @@ final class RunRecorder implements StepListener, AutoCloseable {
     SummaryFile.write(
         dir,
         SummaryContents.of(
-            spec, model, totals, balance, parts.firstTimes(), probes, stop, warnings, watch));
+            spec,
+            model,
+            totals,
+            balance,
+            parts.firstTimes(),
+            probes,
+            stop,
+            warnings,
+            watch,
+            range.map(RangeWatch::outputs).orElse(List.of())));
   }
 
   @Override

@@ -25,7 +25,8 @@ final class SummaryContents {
       ProbeWatch probes,
       StopRule stop,
       List<String> warnings,
-      ThresholdWatch thresholds) {
+      ThresholdWatch thresholds,
+      List<Map<String, Object>> rangeExcursions) {
     TetMesh mesh = model.space().mesh();
     Map<String, Object> root = new LinkedHashMap<>();
     root.put("case", spec.caseFile().toString());
@@ -76,6 +77,9 @@ final class SummaryContents {
       root.put("thresholds", thresholds.summary(spec.quantities().concentration()));
     }
     root.put("units", spec.quantities().describe());
+    if (!rangeExcursions.isEmpty()) {
+      root.put("range_excursions", rangeExcursions);
+    }
     root.put("law", model.law().word());
     root.put("temperature_start", model.referenceTemperature());
     root.put("warnings", warnings);

@@ -2,6 +2,7 @@ package dev.soakfield.fem.run;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.soakfield.fem.results.Series;
 import dev.soakfield.mesh.gen.StructuredMesher;
 import dev.soakfield.mesh.msh.MshWriter;
@@ -65,5 +66,10 @@ class RangeWatchTest {
     assertTrue(overshoots(s).isEmpty(), s.warnings().toString());
     Series series = Series.read(s.outputFolder().resolve("series.csv"));
     assertTrue(series.max("max:body") <= 1 + 1e-12, "max " + series.max("max:body"));
+    assertTrue(
+        new ObjectMapper()
+            .readTree(s.outputFolder().resolve("summary.json").toFile())
+            .path("range_excursions")
+            .isMissingNode());
   }
 }
