@@ -147,6 +147,15 @@ final class EliminatedSystem {
   /** One linear solve of the eliminated system for the right-hand side before elimination. */
   int solve(double[] fullRhs, double[] phi1) {
     double[] b = eliminatedRhs(fullRhs, phi1);
+    double squares = 0;
+    for (double v : b) {
+      squares += v * v; // the solver measures residuals by this norm: it must be finite
+    }
+    if (!Double.isFinite(squares)) {
+      throw new OutOfRangeException(
+          "the step's equations hold numbers beyond double precision (their norm overflows),"
+              + " from a held, flux or exchange value or a coefficient of extreme size");
+    }
     if (!solverHasSystem) {
       solver.setMatrix(system);
       solverHasSystem = true;

@@ -115,6 +115,13 @@ public final class TransientRun {
           ladderBase = dt; // fixed steps: continue on the shorter step from here
         }
         continue;
+      } catch (OutOfRangeException e) {
+        throw new RunFailedException(
+            t,
+            e.getMessage()
+                + "; give the case's values in a unit that keeps them nearer 1 (declare"
+                + " units.concentration) or correct the value",
+            e);
       } catch (SolverStalledException e) {
         throw new RunFailedException(
             t,

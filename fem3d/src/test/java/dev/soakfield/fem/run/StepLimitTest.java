@@ -40,6 +40,23 @@ class StepLimitTest {
         RunManifest.readFrom(dir.resolve("ok")).orElseThrow().status());
   }
 
+  /** A held value whose products overflow is a run that cannot go on, said as such (exit 3). */
+  @Test
+  void valuesBeyondDoublePrecisionStopTheRunWithTheReason() throws IOException {
+    Path c = BoxCase.write(dir, "{ \"end\": 100, \"step\": 10 }").resolveSibling("box.json");
+    java.nio.file.Files.writeString(
+        c, java.nio.file.Files.readString(c).replace("\"value\": 1", "\"value\": 1e300"));
+    RunFailedException e =
+        assertThrows(
+            RunFailedException.class,
+            () -> RunPipeline.run(c, dir.resolve("big"), RunProgress.SILENT));
+    assertTrue(e.getMessage().contains("beyond double precision"), e.getMessage());
+    assertTrue(e.getMessage().contains("units.concentration"), e.getMessage());
+    // the control: 1e30 is large but fine
+    java.nio.file.Files.writeString(c, java.nio.file.Files.readString(c).replace("1e300", "1e30"));
+    RunPipeline.run(c, dir.resolve("large"), RunProgress.SILENT);
+  }
+
   @Test
   void fixedStepsBeyondTheLimitAreRefusedBeforeTheRun() throws IOException {
     CaseInputException e =
