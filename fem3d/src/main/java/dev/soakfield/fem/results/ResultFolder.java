@@ -116,6 +116,52 @@ public final class ResultFolder {
   }
 
   /**
+   * Finishes a run that wrote all its results but was stopped while its report was being made: the
+   * manifest (of this case and mesh) still says running, the staging folder is gone and the summary
+   * is there. {@code completion} makes the report, then the manifest says finished with every file
+   * of the folder but {@code leaveOut}.
+   *
+   * @return whether the folder was such a run (and is now finished)
+   */
+  public static boolean completeUnreported(
+      Path target, RunManifest starting, Completion completion, Set<String> leaveOut) {
+    Path abs = target.toAbsolutePath().normalize();
+    Optional<RunManifest> earlier = RunManifest.readFrom(abs);
+    if (earlier.isEmpty()
+        || earlier.get().status() != RunManifest.Status.RUNNING
+        || !earlier.get().caseSha256().equals(starting.caseSha256())
+        || !earlier.get().meshSha256().equals(starting.meshSha256())
+        || Files.isDirectory(abs.resolve(STAGING))
+        || !Files.isRegularFile(abs.resolve(ResultFiles.SUMMARY))) {
+      return false;
+    }
+    try {
+      List<String> files = new ArrayList<>();
+      try (Stream<Path> all = Files.walk(abs)) {
+        for (Path p : all.filter(Files::isRegularFile).sorted().toList()) {
+          String name = abs.relativize(p).toString().replace('\\', '/');
+          if (!name.equals(RunManifest.FILE)
+              && !name.equals(FolderLock.NAME)
+              && !leaveOut.contains(name)) {
+            files.add(name);
+          }
+        }
+      }
+      RunManifest finished =
+          earlier.get().ended(RunManifest.Status.FINISHED, Optional.empty(), files);
+      for (String f : completion.complete(abs, finished)) {
+        if (!files.contains(f)) {
+          files.add(f);
+        }
+      }
+      earlier.get().ended(RunManifest.Status.FINISHED, Optional.empty(), files).writeTo(abs);
+    } catch (IOException e) {
+      throw unwritable(abs, e);
+    }
+    return true;
+  }
+
+  /**
    * Reopens the folder of an interrupted run of the same case to go on from its checkpoint: the
    * staged files stay, the manifest says running again.
    *

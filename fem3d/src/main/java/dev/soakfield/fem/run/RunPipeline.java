@@ -168,6 +168,13 @@ public final class RunPipeline {
     TimeSettings settings = settings(spec);
 
     RunManifest starting = RunManifest.starting(caseFile, spec.mesh(), options.toolVersion());
+    if (options.resume()
+        && ResultFolder.completeUnreported(
+            outDir, starting, options.completion(), java.util.Set.of(Checkpointer.NAME))) {
+      // stopped between its results and its report: only the report was missing
+      Files.deleteIfExists(outDir.resolve(Checkpointer.NAME));
+      return RunSummary.fromFolder(outDir.toAbsolutePath().normalize());
+    }
     boolean resume =
         options.resume() && ResultFolder.canResume(outDir, starting, Checkpointer.NAME);
     if (options.resume() && !resume) {
