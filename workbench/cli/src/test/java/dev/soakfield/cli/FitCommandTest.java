@@ -173,4 +173,138 @@ class FitCommandTest {
     assertEquals(ExitCodes.BAD_INPUT, t.exitCode());
     assertTrue(t.err().contains("--thickness"), t.err());
   }
+
+  /**
+   * Exit flux J/J_ss of a membrane charged from t = 0 (Devanathan–Stachurski's image-source form of
+   * Crank's membrane solution, §4.3.2): (2/√(πτ))·Σ exp(−(2m+1)²/(4τ)), τ = D·t/L².
+   */
+  private static double exitFluxRatio(double tau) {
+    double sum = 0;
+    for (int m = 0; m < 10_000; m++) {
+      double k = 2 * m + 1;
+      double term = Math.exp(-k * k / (4 * tau));
+      sum += term;
+      if (term <= 1e-17 * sum) {
+        break;
+      }
+    }
+    return 2 / Math.sqrt(Math.PI * tau) * sum;
+  }
+
+  /**
+   * The case of issue 12: a thick steel wall's exit current of 0.067 uA/cm^2 (J_ss = 6.9e-9
+   * mol/(m^2 s)) over a background of 0.05 uA/cm^2 failed with "do not determine both diffusivity
+   * and final level" while the same curve times 10 fitted.
+   */
+  @Test
+  void thickWallPermeationCurrentFits() throws Exception {
+    double l = 8e-3;
+    double d = 1e-10;
+    double jss = 6.9e-9;
+    double faraday = 96485.33212;
+    Random rnd = new Random(12);
+    StringBuilder b = new StringBuilder("time [h],current density [uA/cm^2]\n0,0.05\n");
+    for (int k = 1; k <= 120; k++) {
+      double t = 2 * 3600.0 * k;
+      double j = jss * (exitFluxRatio(d * t / (l * l)) + 0.002 * rnd.nextGaussian());
+      double microAmpsPerCm2 = (j * faraday) * 1e2 + 0.05; // A/m^2 → uA/cm^2 is × 100
+      b.append(String.format(Locale.ROOT, "%d,%.8f%n", 2 * k, microAmpsPerCm2));
+    }
+    Path csv = Files.writeString(dir.resolve("wall.csv"), b.toString());
+    CliRun text = CliRun.of("fit", "--permeation", csv.toString(), "--thickness", "8mm");
+    assertEquals(0, text.exitCode(), text.err());
+    JsonNode j =
+        json(CliRun.of("fit", "--permeation", csv.toString(), "--thickness", "8mm", "--json"));
+    assertEquals(d, j.get("diffusivity").get("value").asDouble(), 0.01 * d);
+    assertTrue(covers(j.get("diffusivity"), d), j.get("diffusivity").toString());
+    assertEquals(jss, j.get("fittedSteadyFlux").get("value").asDouble(), 0.01 * jss);
+    assertEquals(d, j.get("integratedDiffusivity").asDouble(), 0.02 * d);
+  }
+
+  /** The same transient in mol/(m^2 s) at fluxes 12 decades apart reads the same D. */
+  @Test
+  void permeationFluxAtAnyScale() throws Exception {
+    double l = 1e-3;
+    double d = 5e-11;
+    for (double jss : new double[] {1e-15, 1e-12, 6.9e-9, 1e-6, 1e3}) {
+      Random rnd = new Random(7);
+      StringBuilder b = new StringBuilder("time [s],flux [mol/(m^2*s)]\n0,0\n");
+      for (int k = 1; k <= 60; k++) {
+        double t = 1.2 * l * l / d * k / 60;
+        double j = jss * (exitFluxRatio(d * t / (l * l)) + 0.002 * rnd.nextGaussian());
+        b.append(t).append(',').append(j).append('\n');
+      }
+      Path csv = Files.writeString(dir.resolve("j" + jss + ".csv"), b.toString());
+      JsonNode j =
+          json(CliRun.of("fit", "--permeation", csv.toString(), "--thickness", "1mm", "--json"));
+      String at = "J_ss = " + jss + ": " + j.get("diffusivity");
+      assertEquals(d, j.get("diffusivity").get("value").asDouble(), 0.01 * d, at);
+      assertEquals(jss, j.get("fittedSteadyFlux").get("value").asDouble(), 0.01 * jss, at);
+      assertEquals(jss * l / d, j.get("saturation").get("value").asDouble(), 0.02 * jss * l / d);
+    }
+  }
+
+  /** Weighing and drying data at masses from 1e-15 kg to 1e3 kg read the same D and fraction. */
+  @Test
+  void weighingAndDryingAtAnyMassScale() throws Exception {
+    double l = 2e-3;
+    double d = 1.5e-12;
+    for (double water : new double[] {1e-15, 1e-12, 1e-9, 1e-5, 1e3}) {
+      double dry = 100 * water;
+      Random rnd = new Random(9);
+      StringBuilder up = new StringBuilder("time [h],mass [kg]\n0,").append(dry).append('\n');
+      StringBuilder down =
+          new StringBuilder("time [h],mass [kg]\n0,").append(dry + water).append('\n');
+      for (int k = 1; k <= 30; k++) {
+        double t = 3600.0 * 0.6 * k * k;
+        double f = PlaneSheetUptake.fraction(d * t / (l * l));
+        up.append(t / 3600).append(',');
+        up.append(dry + water * (f + 0.002 * rnd.nextGaussian())).append('\n');
+        down.append(t / 3600).append(',');
+        down.append(dry + water * (1 - f + 0.002 * rnd.nextGaussian())).append('\n');
+      }
+      Path upCsv = Files.writeString(dir.resolve("up" + water + ".csv"), up.toString());
+      Path downCsv = Files.writeString(dir.resolve("down" + water + ".csv"), down.toString());
+      for (CliRun r :
+          new CliRun[] {
+            CliRun.of("fit", upCsv.toString(), "--thickness", "2mm", "--json"),
+            CliRun.of("fit", downCsv.toString(), "--thickness", "2mm", "--desorption", "--json")
+          }) {
+        JsonNode j = json(r);
+        String at = "water " + water + " kg: " + j.get("diffusivity");
+        assertEquals(d, j.get("diffusivity").get("value").asDouble(), 0.01 * d, at);
+        assertEquals(0.01, j.get("saturation").get("value").asDouble(), 0.01 * 0.01, at);
+        assertEquals(water, j.get("saturationMass").get("value").asDouble(), 0.01 * water, at);
+      }
+      // the table of the text output shows the changes, not 0.0000 mg for a film's nanograms
+      CliRun text = CliRun.of("fit", upCsv.toString(), "--thickness", "2mm");
+      assertEquals(0, text.exitCode(), text.err());
+      assertFalse(text.out().contains(" 0.0000 "), text.out());
+    }
+  }
+
+  /** Negative control: a record with no transient is refused with the reason, not fitted. */
+  @Test
+  void aFlatRecordIsRefusedWithTheReason() throws Exception {
+    Random rnd = new Random(1);
+    StringBuilder j = new StringBuilder("time [h],flux [mol/(m^2*s)]\n0,0\n");
+    StringBuilder m = new StringBuilder("time [h],mass [g]\n0,5.0\n");
+    for (int k = 1; k <= 40; k++) {
+      j.append(k).append(',').append(6.9e-9 * (1 + 0.01 * rnd.nextGaussian())).append('\n');
+      m.append(k).append(',').append(5.0 + 0.01).append('\n');
+    }
+    Path flux = Files.writeString(dir.resolve("flat-flux.csv"), j.toString());
+    Path mass = Files.writeString(dir.resolve("flat-mass.csv"), m.toString());
+    for (CliRun r :
+        new CliRun[] {
+          CliRun.of("fit", "--permeation", flux.toString(), "--thickness", "8mm", "--json"),
+          CliRun.of("fit", mass.toString(), "--thickness", "2mm", "--json")
+        }) {
+      assertEquals(ExitCodes.BAD_INPUT, r.exitCode(), r.out());
+      assertTrue(r.err().contains("do not determine both diffusivity and final level"), r.err());
+      assertTrue(r.err().contains("no transient"), r.err());
+      assertFalse(r.out().contains("diffusivity"), r.out());
+      assertFalse(r.err().contains("at dev.soakfield"), r.err());
+    }
+  }
 }

@@ -98,10 +98,17 @@ public final class WeighingReport implements FitReport {
     out.printf(
         Locale.ROOT, "  %12s %14s %14s %12s%n", "time", "change [mg]", "fit [mg]", "residual");
     List<Double> res = fit.fit().residuals();
+    // four decimals of a milligram for a usual coupon; a gain far outside that range (a thin film's
+    // nanograms, a part's kilograms) in scientific notation rather than as 0.0000 or 20 digits
+    double levelMg = Math.abs(fit.level().value()) * 1e6;
+    String row =
+        levelMg >= 0.1 && levelMg < 1e5
+            ? "  %12s %14.4f %14.4f %12.4f%n"
+            : "  %12s %14.4e %14.4e %12.3e%n";
     for (int i = 0; i < n; i++) {
       out.printf(
           Locale.ROOT,
-          "  %12s %14.4f %14.4f %12.4f%n",
+          row,
           FitText.time(t[i]),
           change[i] * 1e6,
           fit.model(t[i]) * 1e6,
