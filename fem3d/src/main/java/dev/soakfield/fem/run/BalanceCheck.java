@@ -1,8 +1,6 @@
 package dev.soakfield.fem.run;
 
 import dev.soakfield.fem.casefile.CaseSpec;
-import dev.soakfield.fem.casefile.FaceSpec;
-import dev.soakfield.fem.physics.FaceKind;
 import dev.soakfield.fem.time.RunFailedException;
 import java.util.Locale;
 
@@ -32,25 +30,10 @@ final class BalanceCheck {
                     + " the results are not a solution of the case",
                 relativeError,
                 limit));
-    double strongest = 0;
-    String face = "";
-    for (FaceSpec f : spec.faces().values()) {
-      if (f.kind() == FaceKind.EXCHANGE && f.coefficient().max() > strongest) {
-        strongest = f.coefficient().max();
-        face = f.faceGroup();
-      }
-    }
-    if (strongest > 0) {
-      why.append(
-          String.format(
-              Locale.ROOT,
-              ". The exchange face '%s' has a coefficient of %.3g m/s: a coefficient far above"
-                  + " D divided by the element size makes rows of the linear system many orders"
-                  + " of magnitude apart, which the solver does not resolve; for a surface at"
-                  + " equilibrium with its environment use a concentration (or ambient) face",
-              face,
-              strongest));
-    }
+    why.append(
+        ". The usual cause is steps far longer than the time the part needs to even out (its"
+            + " size squared over D): round-off in the step's equations then swamps what moves;"
+            + " end the run sooner, or cap the step with \"time\": {\"max_step\": ...}");
     why.append(
         ". If this accuracy is enough for the purpose, raise the limit with"
             + " \"time\": {\"balance_limit\": ...}");

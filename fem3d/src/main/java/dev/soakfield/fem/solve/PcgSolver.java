@@ -5,7 +5,6 @@ import java.util.Arrays;
 import java.util.Objects;
 import no.uib.cipr.matrix.DenseVector;
 import no.uib.cipr.matrix.sparse.CG;
-import no.uib.cipr.matrix.sparse.DefaultIterationMonitor;
 import no.uib.cipr.matrix.sparse.IterativeSolverNotConvergedException;
 import no.uib.cipr.matrix.sparse.Preconditioner;
 
@@ -13,6 +12,12 @@ import no.uib.cipr.matrix.sparse.Preconditioner;
  * Preconditioned conjugate gradients for symmetric positive definite {@link CsrMatrix} systems, on
  * MTJ's CG with our own parallel matrix product and preconditioners. Keeps work vectors: use one
  * instance per thread.
+ *
+ * <p>The stopping rule is ‖D⁻¹(b − A x)‖₂ ≤ rtol·‖D⁻¹ b‖₂ with D the matrix's diagonal: each row's
+ * residual is measured as the change of its unknown it stands for, so rows whose scale differs by
+ * many orders of magnitude (an exchange face with a large transfer coefficient next to interior
+ * nodes) are all solved to the same relative accuracy. With the plain ‖r‖₂ the large rows make up
+ * ‖b‖ and the solve stops as soon as they are satisfied, the interior unsolved.
  */
 public final class PcgSolver {
   private final double relativeTolerance;
@@ -23,11 +28,11 @@ public final class PcgSolver {
   private CsrOperator operator;
   private PreconditionerKind active;
   private CG cg;
-  private DefaultIterationMonitor monitor;
+  private ScaledResidualMonitor monitor;
   private double setupSeconds;
 
   /**
-   * @param relativeTolerance stop at ‖b − A x‖ ≤ relativeTolerance·‖b‖; in (0, 1)
+   * @param relativeTolerance stop at ‖D⁻¹(b − A x)‖ ≤ relativeTolerance·‖D⁻¹b‖; in (0, 1)
    * @param maxIterations iteration limit, at least 1
    * @param kind the preconditioner, or AUTO to decide from each matrix
    */
@@ -79,9 +84,10 @@ public final class PcgSolver {
       // Relative part 0: the target is absolute (rtol·‖b‖, set per solve), never relative to the
       // starting residual, so a warm start does not over-solve. No divergence limit: CG's
       // residual may rise before it falls; NaN is still caught by the monitor.
-      monitor = new DefaultIterationMonitor(maxIterations, 0.0, 0.0, Double.POSITIVE_INFINITY);
+      monitor = new ScaledResidualMonitor(maxIterations);
       cg.setIterationMonitor(monitor);
     }
+    monitor.scaleBy(diagonal);
     cg.setPreconditioner(preconditioner);
     matrix = a;
     operator = new CsrOperator(a);
@@ -103,6 +109,7 @@ public final class PcgSolver {
     }
     matrix = a;
     operator = new CsrOperator(a);
+    monitor.scaleBy(a.diagonal());
   }
 
   /** The preconditioner built for the current matrix (JACOBI or AMG; never AUTO). */
@@ -113,7 +120,8 @@ public final class PcgSolver {
 
   /**
    * Solves A x = b; {@code x} holds the starting guess (warm start) and receives the solution.
-   * Stops at ‖r‖ ≤ rtol·‖b‖. b = 0 gives x = 0 without iterating.
+   * Stops at ‖D⁻¹r‖ ≤ rtol·‖D⁻¹b‖. b = 0 gives x = 0 without iterating. The residual and norm in
+   * the returned statistics are in that scaled norm.
    *
    * @throws SolverStalledException when the iteration limit passes without convergence, or on a
    *     breakdown (NaN)
@@ -128,7 +136,7 @@ public final class PcgSolver {
           "vectors of length " + b.length + " and " + x.length + " for a matrix of " + n + " rows");
     }
     long start = System.nanoTime();
-    double rhsNorm = norm(b);
+    double rhsNorm = monitor.scaledNorm(b);
     if (!(rhsNorm < Double.POSITIVE_INFINITY)) {
       throw new IllegalArgumentException("right-hand side is not finite (norm " + rhsNorm + ")");
     }
@@ -165,13 +173,5 @@ public final class PcgSolver {
     if (matrix == null) {
       throw new IllegalStateException("no matrix: call setMatrix before solving");
     }
-  }
-
-  private static double norm(double[] v) {
-    double s = 0;
-    for (double e : v) {
-      s += e * e;
-    }
-    return Math.sqrt(s);
   }
 }

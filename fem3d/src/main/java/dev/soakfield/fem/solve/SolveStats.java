@@ -4,9 +4,9 @@ package dev.soakfield.fem.solve;
  * What one linear solve did.
  *
  * @param iterations CG iterations taken
- * @param residualNorm final residual norm ‖b − A x‖ (as tracked by CG)
- * @param rhsNorm ‖b‖
- * @param converged whether ‖r‖ ≤ rtol·‖b‖ was reached
+ * @param residualNorm final residual norm ‖D⁻¹(b − A x)‖ (as tracked by CG; D the diagonal)
+ * @param rhsNorm ‖D⁻¹b‖
+ * @param converged whether ‖D⁻¹r‖ ≤ rtol·‖D⁻¹b‖ was reached
  * @param setupSeconds time spent building the preconditioner for the current matrix
  * @param solveSeconds time spent in this solve
  */
@@ -18,7 +18,7 @@ public record SolveStats(
     double setupSeconds,
     double solveSeconds) {
 
-  /** ‖r‖/‖b‖, or 0 when b = 0. */
+  /** ‖D⁻¹r‖/‖D⁻¹b‖, or 0 when b = 0. */
   public double relativeResidual() {
     return rhsNorm > 0 ? residualNorm / rhsNorm : 0.0;
   }

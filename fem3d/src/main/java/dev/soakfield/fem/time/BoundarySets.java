@@ -17,7 +17,8 @@ import java.util.TreeSet;
  */
 @SuppressWarnings("ArrayRecordComponent") // records carry precomputed arrays, never shared
 final class BoundarySets {
-  record Exchange(FaceCondition condition, double[] unitLoad, double area) {}
+  /** An exchange group: its unit load ∫N over the faces, its area and the dofs on its faces. */
+  record Exchange(FaceCondition condition, double[] unitLoad, double area, int[] dofs) {}
 
   record Flux(FaceCondition condition, double[] unitLoad, double area) {}
 
@@ -64,7 +65,7 @@ final class BoundarySets {
         case EXCHANGE -> {
           double[] load = new double[n];
           asm.addFaceLoad(load, faces, ones, 1.0);
-          exchanges.add(new Exchange(fc, load, VectorSums.sum(load)));
+          exchanges.add(new Exchange(fc, load, VectorSums.sum(load), asm.faceDofs(faces)));
         }
         case SEALED -> {
           // nothing enters

@@ -31,7 +31,6 @@ final class CoefficientCache {
     final double[] capacityRowSums = new double[n];
     final double[] sinkRowSums = new double[n];
     final List<CsrMatrix> exchangeMass = new ArrayList<>();
-    final List<double[]> exchangeRowSums = new ArrayList<>();
     final List<double[]> exchangeSLoad = new ArrayList<>(); // ∫ S N over the faces
     final List<double[]> inverseS = new ArrayList<>(); // per prescribed group, per dof
 
@@ -62,16 +61,12 @@ final class CoefficientCache {
         CsrMatrix h = first ? asm.newMatrix() : exchangeMass.get(g);
         h.setZero();
         asm.addFaceMass(h, faces, faceS, 1.0);
-        double[] rows = new double[n];
-        h.multiply(ones, rows);
         double[] sLoad = new double[n];
         asm.addFaceLoad(sLoad, faces, faceS, 1.0);
         if (first) {
           exchangeMass.add(h);
-          exchangeRowSums.add(rows);
           exchangeSLoad.add(sLoad);
         } else {
-          exchangeRowSums.set(g, rows);
           exchangeSLoad.set(g, sLoad);
         }
       }

@@ -6,7 +6,6 @@ import static dev.soakfield.fem.time.VectorSums.sum;
 import dev.soakfield.fem.assembly.CsrMatrix;
 import dev.soakfield.fem.assembly.SystemAssembler;
 import dev.soakfield.fem.model.DiffusionModel;
-import dev.soakfield.fem.model.FaceCondition;
 import dev.soakfield.fem.solve.SolverStalledException;
 
 /**
@@ -36,6 +35,8 @@ public final class ThetaStepper {
   private final CoefficientCache coefficients;
   private final EliminatedSystem system;
   private final SourceNewton newton;
+  private final ExchangeRows exchangeRows;
+  private final boolean[] onExchangeFace;
 
   /**
    * Assembles the boundary data of the model once and the coefficient matrices at the starting
@@ -58,6 +59,8 @@ public final class ThetaStepper {
     laws = new LawSources(model, asm);
     newton = new SourceNewton(laws, system, boundary.isPrescribed);
     coefficients = new CoefficientCache(model, asm, boundary, lumped);
+    exchangeRows = new ExchangeRows(model, boundary, constantLoad);
+    onExchangeFace = exchangeRows.nodeMask();
     coefficients.at(0.0);
     if (!laws.isEmpty()) {
       laws.initialize(model.initialPhi(), temperatureAt(0.0));
@@ -208,17 +211,6 @@ public final class ThetaStepper {
     }
   }
 
-  /** The environment's inflow rate through exchange group g at time t for the field phi. */
-  private double exchangeInflow(CoefficientCache.Coefficients co, int g, double t, double[] phi) {
-    BoundarySets.Exchange e = boundary.exchanges.get(g);
-    FaceCondition c = e.condition();
-    double env =
-        c.valueIsPotential()
-            ? c.value().at(t) * sum(co.exchangeSLoad.get(g))
-            : c.value().at(t) * e.area();
-    return c.coefficient().at(t) * (env - dot(co.exchangeRowSums.get(g), phi));
-  }
-
   /**
    * A copy of the matrix one step solves, M + θ·dt·L(t1) with prescribed rows and columns
    * eliminated (prescribed rows keep their diagonal): for users who cross-check a solve with
@@ -282,7 +274,7 @@ public final class ThetaStepper {
       double[] r = new double[n];
       system.multiplyUnreduced(phi1, r);
       for (int i = 0; i < n; i++) {
-        if (boundary.isPrescribed[i]) {
+        if (boundary.isPrescribed[i] && !onExchangeFace[i]) {
           inflow[boundary.prescribedOwner[i]] += r[i] - fullRhs[i] - dt * q[i];
         }
       }
@@ -293,12 +285,7 @@ public final class ThetaStepper {
               * f.area()
               * (theta * f.condition().value().at(t1) + (1 - theta) * f.condition().value().at(t0));
     }
-    for (int g = 0; g < boundary.exchanges.size(); g++) {
-      double in1 = exchangeInflow(c1, g, t1, phi1);
-      double in0 = theta < 1.0 ? exchangeInflow(c0, g, t0, phi0) : 0.0;
-      inflow[boundary.exchanges.get(g).condition().group()] +=
-          dt * (theta * in1 + (1 - theta) * in0);
-    }
+    exchangeRows.addInflow(inflow, c0, c1, new ExchangeRows.Step(t0, t1, dt, theta), phi0, phi1, q);
     double source = dt * sum(constantLoad);
     if (model.hasFirstOrderSource()) {
       source += dt * (theta * dot(c1.sinkRowSums, phi1) + (1 - theta) * dot(c0.sinkRowSums, phi0));

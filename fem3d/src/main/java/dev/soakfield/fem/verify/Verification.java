@@ -17,6 +17,7 @@ public final class Verification {
     checks.addAll(MaximumPrinciple.run());
     checks.addAll(ExchangeAndSink.run(false));
     checks.addAll(ExchangeAndSink.run(true));
+    checks.addAll(ExchangeSheet.run());
     checks.add(DecayingMode.spatialRate(1, 8, 1.9));
     checks.add(DecayingMode.spatialRate(2, 4, 2.9));
     checks.add(DecayingMode.temporalRate(false, 0.9));

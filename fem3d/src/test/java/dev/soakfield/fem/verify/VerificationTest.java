@@ -59,6 +59,24 @@ class VerificationTest {
   }
 
   @Test
+  void exchangeFacesFollowCranksSeriesAndBecomeHeldFacesAsTheCoefficientGrows() {
+    List<Check> checks = ExchangeSheet.run();
+    assertEquals(16, checks.size()); // 2 × (3 uptakes + balance), 3 × (uptake + balance), 2 changes
+    assertAllPass(checks);
+  }
+
+  @Test
+  void theExchangeSeriesHasItsKnownLimits() {
+    // L → ∞ is the held sheet: Crank (1975) eq. 4.18 at D t/(2l)² = 0.1, i.e. D t/l² = 0.4
+    assertEquals(0.697882, ExchangeSheet.fractionalUptake(1e9, 0.4), 1e-6);
+    // L → 0 is a well-stirred sheet: M_t/M_inf = 1 − exp(−L τ) (β₁² → L; Crank §4.3.5, from
+    // memory), here L τ = 0.1
+    assertEquals(1 - Math.exp(-0.1), ExchangeSheet.fractionalUptake(1e-4, 1e3), 1e-4);
+    // negative control: the two limits differ, so the series is not a constant
+    assertTrue(ExchangeSheet.fractionalUptake(1, 0.4) < 0.697882 - 0.1);
+  }
+
+  @Test
   void spatialAndTemporalRatesReachTheirOrders() {
     assertAllPass(
         List.of(
