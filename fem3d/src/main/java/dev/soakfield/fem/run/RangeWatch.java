@@ -177,10 +177,24 @@ final class RangeWatch {
             place(worstNode)[2],
             below && lo == 0 ? " (a negative concentration)" : "",
             lumped ? "lumped" : "consistent",
-            lumped
-                ? "refine the mesh near the face (obtuse elements break the bound)."
-                : "\"capacity\": \"lumped\" keeps the solution in range, or refine the mesh"
-                    + " and the first steps."));
+            advice(lumped)));
+  }
+
+  /**
+   * What keeps the solution in range. Quadratic elements keep no bound under any capacity: their
+   * stiffness couples corner and edge nodes with weights of both signs (common practice; from
+   * memory, Thomée, Galerkin Finite Element Methods for Parabolic Problems, ch. 15).
+   */
+  private String advice(boolean lumped) {
+    if (mesh.order() == 2) {
+      return "quadratic elements keep no such bound under either capacity (they couple corner and"
+          + " edge nodes with weights of both signs): where the bound matters use linear elements"
+          + " with \"capacity\": \"lumped\", or refine the mesh near the face.";
+    }
+    return lumped
+        ? "refine the mesh near the face (obtuse elements break the bound)."
+        : "\"capacity\": \"lumped\" keeps the solution in range, or refine the mesh"
+            + " and the first steps.";
   }
 
   void snapshot(StateBundle b) {

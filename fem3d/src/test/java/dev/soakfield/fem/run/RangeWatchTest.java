@@ -24,12 +24,16 @@ class RangeWatchTest {
   @TempDir Path dir;
 
   private RunSummary bake(String capacity) throws IOException {
+    return bake(capacity, 1);
+  }
+
+  private RunSummary bake(String capacity, int order) throws IOException {
     MshWriter.write(
-        dir.resolve("sheet.msh"), StructuredMesher.box(1e-3, 1e-4, 1e-4, 20, 1, 1, 1), false);
+        dir.resolve("sheet.msh"), StructuredMesher.box(1e-3, 1e-4, 1e-4, 20, 1, 1, order), false);
     // h = 50 µm, h²/D = 25 s; steps of 0.25 s are 1 % of it
     Path c =
         Files.writeString(
-            dir.resolve(capacity + ".json"),
+            dir.resolve(capacity + order + ".json"),
             """
             { "mesh": "sheet.msh",
               "materials": { "body": { "diffusivity": 1e-10 } },
@@ -39,7 +43,7 @@ class RangeWatchTest {
               "time": { "end": 5, "step": 0.25, "capacity": "%s" } }
             """
                 .formatted(capacity));
-    return RunPipeline.run(c, dir.resolve(capacity), RunProgress.SILENT);
+    return RunPipeline.run(c, dir.resolve(capacity + order), RunProgress.SILENT);
   }
 
   private static List<String> overshoots(RunSummary s) {
@@ -71,5 +75,23 @@ class RangeWatchTest {
             .readTree(s.outputFolder().resolve("summary.json").toFile())
             .path("range_excursions")
             .isMissingNode());
+  }
+
+  @Test
+  void quadraticElementsOvershootEvenLumpedAndTheWarningSaysSo() throws IOException {
+    // HRZ lumping makes the capacity diagonal but the quadratic stiffness still has positive
+    // off-diagonal entries, so the discrete maximum principle does not hold (see the class note)
+    RunSummary s = bake("lumped", 2);
+    List<String> w = overshoots(s);
+    assertTrue(w.size() == 1, s.warnings().toString());
+    assertTrue(w.get(0).contains("quadratic elements keep no such bound"), w.get(0));
+    assertTrue(w.get(0).contains("This is the lumped capacity"), w.get(0));
+    // the excursion is real, not round-off: a visible share of the range [0, 1]
+    var excursions =
+        new ObjectMapper()
+            .readTree(s.outputFolder().resolve("summary.json").toFile())
+            .path("range_excursions");
+    assertTrue(excursions.size() >= 1, excursions.toString());
+    assertTrue(excursions.get(0).path("share_of_range").asDouble() > 1e-4, excursions.toString());
   }
 }
