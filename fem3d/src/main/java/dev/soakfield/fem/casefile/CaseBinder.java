@@ -195,7 +195,12 @@ final class CaseBinder {
       Path given = Path.of(name.get());
       return Optional.of(folder == null ? given : folder.resolve(given).normalize());
     } catch (InvalidPathException e) {
-      fields.problems().found(node, "mesh", "a valid file path (" + e.getReason() + ")");
+      String hint =
+          e.getReason().contains("unmappable") || e.getReason().contains("Malformed")
+              ? "; this system's locale cannot hold its characters: run under a UTF-8 locale"
+                  + " (LC_ALL=C.UTF-8) or rename the file in plain ASCII"
+              : "";
+      fields.problems().found(node, "mesh", "a valid file path (" + e.getReason() + ")" + hint);
       return Optional.empty();
     }
   }

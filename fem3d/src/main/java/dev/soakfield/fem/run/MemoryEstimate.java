@@ -1,5 +1,6 @@
 package dev.soakfield.fem.run;
 
+import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.mesh.TetMesh;
 import java.util.Locale;
 
@@ -14,6 +15,14 @@ import java.util.Locale;
  * per row, 10-node element tables), hence about 5 200 bytes per quadratic tetrahedron. A quarter on
  * top covers the collector's headroom; the estimate errs on the generous side for linear runs
  * (about twice the smallest heap that works).
+ *
+ * <p>A case adds its series, which the report reads whole: every column (probes, per-group and
+ * per-face columns) for every step. Measured on the sample case (1 521 nodes, about 111 steps):
+ * with 20 000 probes the smallest heap that completes is between 100 and 110 MB against under 48 MB
+ * with two, about 4 kB per probe, which this splits into {@link #PROBE_BYTES} fixed (name, place,
+ * the summary's entries) and {@link #SERIES_BYTES_PER_VALUE} per step (the value as read and as
+ * written). 600 outputs ran in the same 48 MB as three: {@link #OUTPUT_BYTES} is a generous upper
+ * figure for their summary entries.
  */
 public record MemoryEstimate(long tets, int order, long bytes) {
   /** Measured peak heap per linear tetrahedron, end to end (bytes). */
@@ -27,6 +36,40 @@ public record MemoryEstimate(long tets, int order, long bytes) {
 
   /** Heap the collector needs beyond the live data (common practice: a quarter). */
   static final double MARGIN = 1.25;
+
+  /** Fixed heap per probe: its name, place and element, and its entries in summary.json (bytes). */
+  static final long PROBE_BYTES = 2048;
+
+  /** Heap per series value (one column, one step), as written and as read back (bytes). */
+  static final long SERIES_BYTES_PER_VALUE = 16;
+
+  /** Heap per output time: its entries in the summary (bytes). */
+  static final long OUTPUT_BYTES = 1024;
+
+  /** Series columns besides the probes: time, amounts, balance and so on (common practice). */
+  static final int FIXED_COLUMNS = 8;
+
+  /**
+   * The estimate for the case's run: the mesh's share (see {@link #of(TetMesh, int)}) plus its
+   * series (probes, volume and face groups, for the estimated steps) and outputs.
+   */
+  public static MemoryEstimate of(CaseSpec spec, TetMesh mesh) {
+    long steps = RunTimeEstimate.of(spec, mesh).steps();
+    long probes = spec.probes().size();
+    long columns =
+        FIXED_COLUMNS
+            + probes
+            + 3L * mesh.volumeGroups().size()
+            + 2L * mesh.faceGroups().size()
+            + spec.thresholds().size();
+    long caseBytes =
+        probes * PROBE_BYTES
+            + columns * steps * SERIES_BYTES_PER_VALUE
+            + spec.time().outputs().size() * OUTPUT_BYTES;
+    MemoryEstimate meshOnly = of(mesh, mesh.order());
+    return new MemoryEstimate(
+        meshOnly.tets(), meshOnly.order(), meshOnly.bytes() + (long) (MARGIN * caseBytes));
+  }
 
   /** The estimate for {@code mesh} run with elements of {@code order} (1 or 2). */
   public static MemoryEstimate of(TetMesh mesh, int order) {
@@ -49,8 +92,8 @@ public record MemoryEstimate(long tets, int order, long bytes) {
     throw new HeapTooSmallException(
         String.format(
             Locale.ROOT,
-            "the run needs about %s of Java heap (%d %s tetrahedra at ~%d bytes each, plus"
-                + " headroom), but the heap is limited to %s; raise it, e.g."
+            "the run needs about %s of Java heap (%d %s tetrahedra at ~%d bytes each, plus the"
+                + " series and headroom), but the heap is limited to %s; raise it, e.g."
                 + " JAVA_OPTS=-Xmx%dm ./soakfield run ..., or use a coarser mesh",
             megabytes(bytes),
             tets,

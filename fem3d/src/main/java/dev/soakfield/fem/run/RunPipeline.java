@@ -139,7 +139,7 @@ public final class RunPipeline {
   public static RunSummary run(
       Prepared prepared, Path outDir, RunProgress progress, RunOptions options) throws IOException {
     TetMesh mesh = prepared.mesh();
-    MemoryEstimate memory = MemoryEstimate.of(mesh, mesh.order());
+    MemoryEstimate memory = MemoryEstimate.of(prepared.spec(), mesh);
     memory.requireHeap(options.maxHeap()); // refused before anything is written
     FolderLock lock = FolderLock.take(outDir);
     try {

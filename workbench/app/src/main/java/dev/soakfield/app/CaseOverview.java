@@ -115,7 +115,7 @@ public final class CaseOverview {
       sb.append("; threshold ").append(num(c.threshold().getAsDouble()));
     }
     sb.append('\n');
-    MemoryEstimate mem = MemoryEstimate.of(mesh, mesh.order());
+    MemoryEstimate mem = MemoryEstimate.of(c, mesh);
     sb.append(
         String.format(
             Locale.ROOT,

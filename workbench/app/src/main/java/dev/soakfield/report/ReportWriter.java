@@ -26,6 +26,9 @@ import java.util.stream.Stream;
  * copy. A folder of a failed run gets a report of what there is, saying so.
  */
 public final class ReportWriter {
+  /** Probe curves drawn in the report's picture at most. */
+  static final int MAX_PROBE_CURVES = 12;
+
   public static final String HTML = "report.html";
   public static final String MARKDOWN = "report.md";
 
@@ -234,8 +237,18 @@ public final class ReportWriter {
                   "concentration [" + units.concentration() + "]",
                   axis)
               .time(t);
-      for (String p : probes) {
+      // a legend stays readable, and the picture's memory bounded, with a dozen curves
+      List<String> shown = probes.subList(0, Math.min(probes.size(), MAX_PROBE_CURVES));
+      for (String p : shown) {
         plot.line(p, s.column("probe:" + p).orElseThrow());
+      }
+      if (shown.size() < probes.size()) {
+        doc.paragraph(
+            "The first "
+                + shown.size()
+                + " of "
+                + probes.size()
+                + " probes (in the case's order); series.csv has every probe's column.");
       }
       if (plot.hasData()) {
         doc.picture("report-probes.png", "Concentration at the probes over time", plot.png());

@@ -9,6 +9,9 @@ import java.util.Map;
 
 /** The report's "Time to threshold": the case's single threshold and its list of thresholds. */
 final class ThresholdSection {
+  /** Probe rows of the first-time table at most: a report is read, not searched. */
+  static final int MAX_PROBE_ROWS = 50;
+
   private ThresholdSection() {}
 
   static void write(ReportDocument doc, JsonNode summary, String unit) {
@@ -50,14 +53,26 @@ final class ThresholdSection {
             + " concentration the case sets are left out, since they hold the face's value from"
             + " the start:");
     List<List<String>> rows = new ArrayList<>();
+    int probes = 0;
     for (String kind : List.of("volume_groups", "probes")) {
       for (Map.Entry<String, JsonNode> e : th.path("first_time").path(kind).properties()) {
-        rows.add(
-            List.of(
-                kind.equals("probes") ? "probe" : "volume group", e.getKey(), when(e.getValue())));
+        boolean probe = kind.equals("probes");
+        if (probe && ++probes > MAX_PROBE_ROWS) {
+          continue;
+        }
+        rows.add(List.of(probe ? "probe" : "volume group", e.getKey(), when(e.getValue())));
       }
     }
     doc.table(List.of("where", "name", "first time"), rows);
+    if (probes > MAX_PROBE_ROWS) {
+      doc.paragraph(
+          "The first "
+              + MAX_PROBE_ROWS
+              + " of "
+              + probes
+              + " probes (in the case's order); summary.json's threshold.first_time.probes has"
+              + " every one.");
+    }
   }
 
   private static String when(JsonNode v) {

@@ -26,12 +26,26 @@ public final class ExitCodes {
 
   /** Runs {@code command} with {@code args} and returns the exit code. */
   public static int execute(Object command, String[] args) {
-    return configure(new CommandLine(command)).execute(args);
+    try {
+      return configure(new CommandLine(command)).execute(args);
+    } catch (OutOfMemoryError e) {
+      // what was written so far stays (a run's results are durable before its report); the user
+      // needs the heap and how to raise it, not a trace
+      System.err.printf(
+          java.util.Locale.ROOT,
+          "soakfield: the Java heap ran out (limit %d MB); raise it, e.g. JAVA_OPTS=-Xmx%dm"
+              + " ./soakfield ..., or use a coarser mesh, fewer probes or fewer outputs; a run"
+              + " stopped after its results can be finished with --resume%n",
+          Runtime.getRuntime().maxMemory() >> 20,
+          2 * (Runtime.getRuntime().maxMemory() >> 20));
+      return BAD_INPUT;
+    }
   }
 
   /** Applies the project's exit codes and error handling to {@code cl}. */
   public static CommandLine configure(CommandLine cl) {
     cl.setExitCodeExceptionMapper(ExitCodes::codeFor);
+    cl.registerConverter(java.nio.file.Path.class, FileNames::path);
     cl.setParameterExceptionHandler(
         (ex, args) -> {
           PrintWriter err = ex.getCommandLine().getErr();
@@ -70,8 +84,10 @@ public final class ExitCodes {
         || ex instanceof SourceLawException) {
       return NUMERICAL_FAILURE;
     }
-    if (ex instanceof java.io.IOException || ex instanceof java.io.UncheckedIOException) {
-      return BAD_INPUT; // a missing, read-only or full place on disk: the user's to change
+    if (ex instanceof java.io.IOException
+        || ex instanceof java.io.UncheckedIOException
+        || ex instanceof java.nio.file.InvalidPathException) {
+      return BAD_INPUT; // a missing, read-only or full place on disk, a name the locale cannot hold
     }
     return INTERNAL_ERROR;
   }
@@ -94,6 +110,9 @@ public final class ExitCodes {
     }
     if (io instanceof java.io.IOException) {
       return "a file could not be read or written: " + io.getMessage();
+    }
+    if (io instanceof java.nio.file.InvalidPathException p) {
+      return FileNames.explain(p.getInput());
     }
     return String.valueOf(ex.getMessage());
   }
