@@ -3,6 +3,7 @@ package dev.soakfield.mesh;
 import java.io.IOException;
 import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
@@ -71,7 +72,13 @@ public final class AtomicFiles {
     if (dir != null) {
       Files.createDirectories(dir);
     }
-    Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".part");
+    Path tmp;
+    try {
+      tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".part");
+    } catch (FileSystemException e) {
+      // the user named the target, not our hidden temporary file beside it
+      throw new FileSystemException(abs.toString(), null, reason(e));
+    }
     boolean done = false;
     try {
       writer.writeTo(tmp);
@@ -95,5 +102,15 @@ public final class AtomicFiles {
         Files.deleteIfExists(tmp);
       }
     }
+  }
+
+  private static String reason(FileSystemException e) {
+    if (e instanceof java.nio.file.NoSuchFileException) {
+      return "its folder cannot hold new files (no such file or folder)";
+    }
+    if (e instanceof java.nio.file.AccessDeniedException) {
+      return "its folder cannot hold new files (permission denied)";
+    }
+    return e.getReason() != null ? e.getReason() : "the file system refused";
   }
 }

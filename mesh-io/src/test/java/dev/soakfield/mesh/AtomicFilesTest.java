@@ -29,6 +29,20 @@ class AtomicFilesTest {
   }
 
   @Test
+  void aFolderThatTakesNoFilesIsReportedWithTheTargetsName() {
+    // /proc takes no new files, not even for root (Linux; common practice for this test)
+    org.junit.jupiter.api.Assumptions.assumeTrue(Files.isDirectory(Path.of("/proc/self")));
+    Path target = Path.of("/proc/soakfield-picture.png");
+    java.nio.file.FileSystemException e =
+        assertThrows(
+            java.nio.file.FileSystemException.class,
+            () -> AtomicFiles.write(target, f -> Files.writeString(f, "x")));
+    assertEquals(target.toString(), e.getFile());
+    org.junit.jupiter.api.Assertions.assertTrue(
+        e.getReason().contains("cannot hold new files"), e.getReason());
+  }
+
+  @Test
   void failedWriteLeavesTheOldFileAndNoTemporary() throws IOException {
     Path target = dir.resolve("out.txt");
     Files.writeString(target, "old");

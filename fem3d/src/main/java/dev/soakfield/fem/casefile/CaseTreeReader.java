@@ -5,6 +5,7 @@ import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.core.json.JsonReadFeature;
 import java.io.IOException;
 import java.io.InputStream;
@@ -38,7 +39,7 @@ final class CaseTreeReader {
   static CaseNode read(Path file, String source) {
     try (InputStream in = Files.newInputStream(file);
         JsonParser parser = FACTORY.createParser(in)) {
-      return readDocument(parser, source);
+      return readLocated(parser, source);
     } catch (NoSuchFileException e) {
       throw single(source, 0, 0, "found no such file, expected a readable case file");
     } catch (IOException e) {
@@ -49,9 +50,32 @@ final class CaseTreeReader {
   /** Reads case text held in memory (a case being edited), as {@link #read} reads a file. */
   static CaseNode readText(String text, String source) {
     try (JsonParser parser = FACTORY.createParser(text)) {
-      return readDocument(parser, source);
+      return readLocated(parser, source);
     } catch (IOException e) {
       throw located(e, source);
+    }
+  }
+
+  /**
+   * Reads the document; a parser failure without a place of its own (a limit of the parser, such as
+   * the nesting depth) is placed where the parser stopped.
+   */
+  private static CaseNode readLocated(JsonParser parser, String source) throws IOException {
+    try {
+      return readDocument(parser, source);
+    } catch (StreamConstraintsException e) {
+      JsonLocation at = parser.currentLocation();
+      throw single(
+          source,
+          at.getLineNr(),
+          at.getColumnNr(),
+          e.getOriginalMessage().contains("nesting depth")
+              ? "found objects or lists nested more than "
+                  + FACTORY.streamReadConstraints().getMaxNestingDepth()
+                  + " deep, expected a case file (objects and lists nested a few levels deep)"
+              : "found a value beyond what a case file may hold ("
+                  + e.getOriginalMessage().replaceAll(", from `[^`]*`", "")
+                  + ")");
     }
   }
 
