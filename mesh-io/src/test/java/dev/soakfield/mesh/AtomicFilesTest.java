@@ -29,6 +29,15 @@ class AtomicFilesTest {
   }
 
   @Test
+  void aDurableWriteReplacesTheTargetAndLeavesNoTemporary() throws IOException {
+    Path target = dir.resolve("nested/state.bin");
+    AtomicFiles.writeDurably(target, f -> Files.writeString(f, "first"));
+    AtomicFiles.writeDurably(target, f -> Files.writeString(f, "second"));
+    assertEquals("second", Files.readString(target));
+    assertEquals(1, filesIn(dir.resolve("nested")));
+  }
+
+  @Test
   void aFolderThatTakesNoFilesIsReportedWithTheTargetsName() {
     // /proc takes no new files, not even for root (Linux; common practice for this test)
     org.junit.jupiter.api.Assumptions.assumeTrue(Files.isDirectory(Path.of("/proc/self")));
