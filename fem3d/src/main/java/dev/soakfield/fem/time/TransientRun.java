@@ -93,8 +93,10 @@ public final class TransientRun {
       double target = targets.ceiling(t + minStep);
       double remaining = target - t;
       // never longer than dt (so a rejection always shortens the try), and no sliver before the
-      // target: a remainder up to 1.25 dt is taken in two equal steps
-      double tryDt = remaining <= dt ? remaining : remaining <= 1.25 * dt ? remaining / 2 : dt;
+      // target: a remainder up to 1.25 dt is taken in two equal steps. A remainder within 1e-9 of
+      // dt is one step: the round-off of adding dt up must not turn the last step into two.
+      double tryDt =
+          remaining <= dt * (1 + 1e-9) ? remaining : remaining <= 1.25 * dt ? remaining / 2 : dt;
       double theta = TimeSettings.thetaOfStep(s.crankNicolson(), sinceRestart);
       StepOutcome out;
       try {

@@ -59,6 +59,31 @@ class TransientRunTest {
     };
   }
 
+  /**
+   * Fixed steps take exactly the count the case implies: end = 100 steps of 0.1 (not exact in
+   * binary) once took 101, the round-off of adding 0.1 up leaving a remainder a hair over one step,
+   * which was split in two. Negative control: a remainder really 1e-6 over one step is still split.
+   */
+  @Test
+  void fixedStepsTakeExactlyTheCountTheEndImplies() {
+    DiffusionModel m = box(FaceKind.FLUX, TimeFunction.constant(1));
+    for (double[] endAndSteps : new double[][] {{10.0, 100}, {1e3 * 0.1 * 3, 3000}}) {
+      ThetaStepper stepper = new ThetaStepper(m, false, 1e-12, 2000);
+      double end = endAndSteps[0];
+      TimeSettings s = new TimeSettings(end, new double[] {end}, false, Double.NaN, 0.1, 0.1, 0.1);
+      List<Double> times = new ArrayList<>();
+      RunTotals totals =
+          TransientRun.run(stepper, m.initialPhi(), s, (t, dt, out, output) -> times.add(t));
+      assertEquals((int) endAndSteps[1], totals.steps(), "end " + end);
+      assertEquals(end, times.get(times.size() - 1), 0.0);
+    }
+    ThetaStepper stepper = new ThetaStepper(m, false, 1e-12, 2000);
+    double end = 10.0 + 1e-6;
+    TimeSettings s = new TimeSettings(end, new double[] {end}, false, Double.NaN, 0.1, 0.1, 0.1);
+    RunTotals totals = TransientRun.run(stepper, m.initialPhi(), s, (t, dt, out, output) -> {});
+    assertEquals(101, totals.steps());
+  }
+
   @Test
   void adaptiveStepsLandOnOutputsAndTableBreakpoints() {
     DiffusionModel m = box(FaceKind.FLUX, ramp());
