@@ -161,9 +161,11 @@ public final class RunPipeline {
     CaseSpec spec = prepared.spec();
     TetMesh mesh = prepared.mesh();
     List<String> warnings = new ArrayList<>(prepared.warnings());
+    long modelStart = System.nanoTime();
     DiffusionModel model = ModelBuilder.build(spec, mesh, warnings, laws);
     boolean lumped = spec.time().capacity() == CapacityForm.LUMPED;
     ThetaStepper stepper = new ThetaStepper(model, lumped, SOLVER_TOLERANCE, SOLVER_MAX_ITERATIONS);
+    double modelSeconds = (System.nanoTime() - modelStart) * 1e-9;
     continueLawStates(spec, mesh, stepper, warnings);
     TimeSettings settings = settings(spec);
 
@@ -217,6 +219,7 @@ public final class RunPipeline {
       RunRecorder recorder;
       ProgressRelay relay;
       RunTotals totals;
+      double steppingSeconds;
       try {
         recorder =
             new RunRecorder(
@@ -241,10 +244,12 @@ public final class RunPipeline {
         }
         int warned = warnings.size();
         relay = new ProgressRelay(recorder, spec.time().end(), progress, log);
+        long steppingStart = System.nanoTime();
         try (recorder) {
           totals =
               TransientRun.run(stepper, model.initialPhi(), settings, relay, checkpoints, cursor);
         }
+        steppingSeconds = (System.nanoTime() - steppingStart) * 1e-9;
         recorder.finish(totals);
         for (String w : warnings.subList(warned, warnings.size())) {
           log.line("warning: " + w); // what the run itself found (e.g. an overshoot)
@@ -273,8 +278,19 @@ public final class RunPipeline {
               relay.solveSeconds(),
               log.elapsedSeconds(),
               recorder.balanceRelative()));
+      RunTimes times =
+          new RunTimes(
+              modelSeconds,
+              steppingSeconds,
+              relay.solveSeconds(),
+              totals.linearIterations(),
+              recorder.outputSeconds(),
+              Double.NaN);
+      log.line(times.line());
       log.close();
+      long reportStart = System.nanoTime();
       folder.finish(options.completion());
+      progress.timed(times.withReport((System.nanoTime() - reportStart) * 1e-9));
       Files.deleteIfExists(checkpoint); // the results are complete: nothing left to resume
       return new RunSummary(
           folder.target(),

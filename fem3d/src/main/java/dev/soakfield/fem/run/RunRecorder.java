@@ -50,6 +50,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
   private final SeriesRows rows;
   private final SeriesWriter series;
   private final FrameWriter frames;
+  private double outputSeconds;
   private final StopRule stop;
   private final double[] partAmounts0;
   private final double end;
@@ -327,7 +328,14 @@ final class RunRecorder implements StepListener, AutoCloseable {
           new VtuWriter.Field(
               "trapped", 1, stepper.trappedField(t), spec.quantities().amount() + "/m^3"));
     }
+    long start = System.nanoTime();
     frames.write(t, f);
+    outputSeconds += (System.nanoTime() - start) * 1e-9;
+  }
+
+  /** Wall seconds spent writing field outputs so far. */
+  double outputSeconds() {
+    return outputSeconds;
   }
 
   void finish(RunTotals totals) throws IOException {
