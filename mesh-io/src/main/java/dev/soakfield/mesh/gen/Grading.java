@@ -64,38 +64,75 @@ public final class Grading {
 
   /**
    * {@code n + 1} positions from {@code from} to {@code from + length}, graded toward the start by
-   * {@code startRatio} and toward the end by {@code endRatio} (1: none).
+   * {@code startRatio} and toward the end by {@code endRatio} (1: none). Graded at both ends, each
+   * end grades its half; an odd count shares the middle cell, half of it in each half, so equal
+   * ratios give mirror-image halves.
    */
   static double[] planes(double from, double length, int n, double startRatio, double endRatio) {
     if (startRatio == 1 && endRatio == 1) {
       return TensorGrid.planes(from, length, n);
     }
-    double[] sizes = new double[n];
-    if (startRatio != 1 && endRatio != 1 && n > 1) {
-      int first = (n + 1) / 2;
-      fill(sizes, 0, first, length / 2, startRatio, false);
-      fill(sizes, first, n - first, length / 2, endRatio, true);
-    } else if (endRatio != 1) {
-      fill(sizes, 0, n, length, endRatio, true);
-    } else {
-      fill(sizes, 0, n, length, startRatio, false);
-    }
     double[] p = new double[n + 1];
     p[0] = from;
-    for (int i = 0; i < n; i++) {
-      p[i + 1] = p[i] + sizes[i];
-    }
     p[n] = from + length;
+    if (startRatio != 1 && endRatio != 1 && n > 1) {
+      int half = n / 2;
+      boolean shared = n % 2 == 1;
+      double[] start = halfSeries(half, shared, length / 2, startRatio);
+      double[] end = halfSeries(half, shared, length / 2, endRatio);
+      // Both halves are laid from their own end, so equal ratios mirror to the last bit.
+      for (int i = 1; i <= half; i++) {
+        p[i] = from + start[i];
+        p[n - i] = from + length - end[i];
+      }
+      return p;
+    }
+    boolean towardStart = startRatio != 1;
+    double r = towardStart ? startRatio : endRatio;
+    double h1 = length * (r - 1) / (Math.pow(r, n) - 1);
+    double sum = 0;
+    for (int i = 1; i < n; i++) {
+      sum += h1 * Math.pow(r, i - 1);
+      if (towardStart) {
+        p[i] = from + sum;
+      } else {
+        p[n - i] = from + length - sum;
+      }
+    }
     return p;
   }
 
-  /** {@code count} sizes summing to {@code length}, growing by {@code r} from the finer end. */
-  private static void fill(
-      double[] sizes, int at, int count, double length, double r, boolean finestLast) {
-    double h1 = r == 1 ? length / count : length * (r - 1) / (Math.pow(r, count) - 1);
-    for (int i = 0; i < count; i++) {
-      double h = h1 * Math.pow(r, i);
-      sizes[finestLast ? at + count - 1 - i : at + i] = h;
+  /**
+   * Distances from an end of the first {@code count} planes (index 0 is the end itself) of a half
+   * of length {@code halfLength}: cells growing by {@code r}, plus half of a shared middle cell.
+   */
+  private static double[] halfSeries(int count, boolean shared, double halfLength, double r) {
+    double rn = Math.pow(r, count);
+    double cells = (rn - 1) / (r - 1) + (shared ? rn / 2 : 0);
+    double h1 = halfLength / cells;
+    double[] d = new double[count + 1];
+    for (int i = 1; i <= count; i++) {
+      d[i] = d[i - 1] + h1 * Math.pow(r, i - 1);
     }
+    return d;
+  }
+
+  /**
+   * The planes with every cell between them cut into {@code k} equal cells: a refinement that keeps
+   * every given plane, so a grading keeps its shape while all its cells shrink alike.
+   */
+  static double[] split(double[] planes, int k) {
+    if (k == 1) {
+      return planes;
+    }
+    int n = planes.length - 1;
+    double[] p = new double[n * k + 1];
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < k; j++) {
+        p[i * k + j] = planes[i] + (planes[i + 1] - planes[i]) * j / k;
+      }
+    }
+    p[n * k] = planes[n];
+    return p;
   }
 }

@@ -14,7 +14,7 @@ import dev.soakfield.mesh.TetMesh;
  */
 final class KuhnSplit {
   /** The six orders in which the path from corner 0 to corner 7 takes the three axes. */
-  private static final int[][] AXIS_ORDERS = {
+  static final int[][] AXIS_ORDERS = {
     {0, 1, 2}, {0, 2, 1}, {1, 0, 2}, {1, 2, 0}, {2, 0, 1}, {2, 1, 0}
   };
 

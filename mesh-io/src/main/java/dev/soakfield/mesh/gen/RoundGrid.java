@@ -198,6 +198,40 @@ final class RoundGrid {
             new FaceGroup("top", 4, FaceGroupKind.EXTERIOR)));
   }
 
+  /**
+   * One column of cells of {@link #pipe(double[], double[], int)}, the one at angle 0 to 2π /
+   * nAround: every column is this one turned, so it stands for all of them when cells are measured.
+   */
+  static HexGrid pipeSector(double[] radii, double[] zs, int nAround) {
+    int nRadial = radii.length - 1;
+    int nz = zs.length - 1;
+    int perLevel = 2 * (nRadial + 1);
+    double[] xyz = new double[3 * perLevel * (nz + 1)];
+    double angle = 2 * Math.PI / nAround;
+    for (int k = 0; k <= nz; k++) {
+      for (int r = 0; r <= nRadial; r++) {
+        int node = k * perLevel + 2 * r;
+        put(xyz, node, radii[r], 0, zs[k]);
+        put(xyz, node + 1, radii[r] * Math.cos(angle), radii[r] * Math.sin(angle), zs[k]);
+      }
+    }
+    int cells = nRadial * nz;
+    int[] corners = new int[8 * cells];
+    for (int k = 0; k < nz; k++) {
+      for (int r = 0; r < nRadial; r++) {
+        int cell = k * nRadial + r;
+        for (int c = 0; c < 8; c++) {
+          corners[8 * cell + c] =
+              (k + ((c >> 2) & 1)) * perLevel + 2 * (r + ((c >> 1) & 1)) + (c & 1);
+        }
+      }
+    }
+    int[] sideGroup = new int[6 * cells];
+    Arrays.fill(sideGroup, HexGrid.NO_FACE);
+    return new HexGrid(
+        xyz, corners, new int[cells], sideGroup, List.of(new VolumeGroup("body", 1)), List.of());
+  }
+
   /** Square node index (i + (m + 1) j) of boundary position t, counter-clockwise from (0, 0). */
   static int squareBoundaryNode(int t, int m) {
     int i;

@@ -297,9 +297,11 @@ public final class StructuredMesher {
       java.util.Set.of("xmin", "xmax", "ymin", "ymax", "zmin", "zmax");
 
   /**
-   * The cell counts {@link #cylinder} meshes with: the given ones, with the around and axial counts
-   * (and the radial one, if its cells are the long ones) raised where a cell would be more than
-   * four times longer than it is thin ({@link ShapeGuard}), unless {@code asGiven}.
+   * The cell counts {@link #cylinder} meshes with: the given ones, raised where a tetrahedron would
+   * have a dihedral angle under 10° ({@link ShapeGuard}), unless {@code asGiven}. A graded
+   * direction grows by whole multiples, each given cell cut into equal ones.
+   *
+   * @throws CellCountsException when the counts needed would make too large a mesh
    */
   public static int[] cylinderCells(
       double radius,
@@ -309,30 +311,63 @@ public final class StructuredMesher {
       int nz,
       Grading grading,
       boolean asGiven) {
-    int[] n = {nRadial, nAround, nz};
+    checkCylinder(radius, height, nRadial, nAround, nz, grading);
+    int[] given = {nRadial, nAround, nz};
     if (asGiven) {
-      return n;
+      return given;
     }
+    int[] step = {radialGraded(grading, "side") ? nRadial : 1, 4, axialGraded(grading) ? nz : 1};
     return ShapeGuard.settle(
-        n,
-        c -> {
-          double s = RoundGrid.squareHalfSide(radius, c[0], c[1]);
-          double[] w = Grading.planes(0, 1, c[0], 1, grading.at("side"));
-          double[] sizes = new double[c[0] + 1];
-          for (int i = 0; i < c[0]; i++) {
-            sizes[i] = (w[i + 1] - w[i]) * (radius - s);
-          }
-          sizes[c[0]] = 2 * s / (c[1] / 4.0); // the central square's cells
-          return ShapeGuard.counts(
-              sizes,
-              8 * s,
-              2 * Math.PI * radius,
-              height,
-              c,
-              4,
-              grading.at("side") != 1,
-              ShapeGuard.SKEWED_ASPECT);
-        });
+        given,
+        step,
+        c ->
+            new ShapeGuard.Probe(
+                RoundGrid.cylinder(
+                    radius,
+                    ShapeGuard.extremeLayers(axialPlanes(height, nz, c[2], grading)),
+                    ringWeights(nRadial, c[0], grading),
+                    c[1]),
+                (c[1] / 4) * (c[1] / 4)),
+        c -> (c[1] / 4.0) * (c[1] / 4.0) * c[2] + (double) c[1] * c[0] * c[2]);
+  }
+
+  private static boolean radialGraded(Grading grading, String face) {
+    return grading.at(face) != 1;
+  }
+
+  private static boolean axialGraded(Grading grading) {
+    return grading.at("bottom") != 1 || grading.at("top") != 1;
+  }
+
+  /**
+   * Planes of a direction meshed with {@code used} cells where {@code given} were asked: evenly
+   * spaced when ungraded, else the given grading with each cell cut into used / given.
+   */
+  private static double[] planes(
+      double from, double length, int given, int used, double startRatio, double endRatio) {
+    if (startRatio == 1 && endRatio == 1) {
+      return TensorGrid.planes(from, length, used);
+    }
+    return Grading.split(Grading.planes(from, length, given, startRatio, endRatio), used / given);
+  }
+
+  private static double[] axialPlanes(double height, int given, int used, Grading grading) {
+    return planes(0, height, given, used, grading.at("bottom"), grading.at("top"));
+  }
+
+  private static double[] ringWeights(int given, int used, Grading grading) {
+    return planes(0, 1, given, used, 1, grading.at("side"));
+  }
+
+  private static double[] wallRadii(
+      double innerRadius, double outerRadius, int given, int used, Grading grading) {
+    return planes(
+        innerRadius,
+        outerRadius - innerRadius,
+        given,
+        used,
+        grading.at("inner"),
+        grading.at("outer"));
   }
 
   /**
@@ -349,24 +384,15 @@ public final class StructuredMesher {
       int order,
       Grading grading,
       boolean asGiven) {
-    grading.onlyFaces(CYLINDER_FACES, "cylinder");
-    Args.length("radius", radius);
-    Args.length("height", height);
-    Args.count("cells across the radius", nRadial);
-    Args.count("cells along the height", nz);
     Args.order(order);
-    if (nAround < 8 || nAround % 4 != 0) {
-      throw new IllegalArgumentException(
-          "cells around: found " + nAround + ", expected a multiple of 4, at least 8");
-    }
     int[] n = cylinderCells(radius, height, nRadial, nAround, nz, grading, asGiven);
     double m = n[1] / 4.0;
     Args.size((m * m + n[1] * (double) n[0]) * n[2], (m + 1) * (m + 1) * (n[2] + 1.0), order);
     HexGrid grid =
         RoundGrid.cylinder(
             radius,
-            Grading.planes(0, height, n[2], grading.at("bottom"), grading.at("top")),
-            Grading.planes(0, 1, n[0], 1, grading.at("side")),
+            axialPlanes(height, nz, n[2], grading),
+            ringWeights(nRadial, n[0], grading),
             n[1]);
     TetMesh mesh = finish(grid, order);
     return order == 2 ? CircleSnap.snap(mesh, radius) : mesh;
@@ -393,8 +419,11 @@ public final class StructuredMesher {
   }
 
   /**
-   * The cell counts {@link #pipe} meshes with: the given ones, raised where a cell would be more
-   * than four times longer than it is thin ({@link ShapeGuard}), unless {@code asGiven}.
+   * The cell counts {@link #pipe} meshes with: the given ones, raised where a tetrahedron would
+   * have a dihedral angle under 10° ({@link ShapeGuard}), unless {@code asGiven}. A graded
+   * direction grows by whole multiples, each given cell cut into equal ones.
+   *
+   * @throws CellCountsException when the counts needed would make too large a mesh
    */
   public static int[] pipeCells(
       double innerRadius,
@@ -405,34 +434,24 @@ public final class StructuredMesher {
       int nz,
       Grading grading,
       boolean asGiven) {
-    int[] n = {nRadial, nAround, nz};
+    checkPipe(innerRadius, outerRadius, height, nRadial, nAround, nz, grading);
+    int[] given = {nRadial, nAround, nz};
     if (asGiven) {
-      return n;
+      return given;
     }
+    boolean wallGraded = radialGraded(grading, "inner") || radialGraded(grading, "outer");
+    int[] step = {wallGraded ? nRadial : 1, 1, axialGraded(grading) ? nz : 1};
     return ShapeGuard.settle(
-        n,
-        c -> {
-          double[] r =
-              Grading.planes(
-                  innerRadius,
-                  outerRadius - innerRadius,
-                  c[0],
-                  grading.at("inner"),
-                  grading.at("outer"));
-          double[] sizes = new double[c[0]];
-          for (int i = 0; i < c[0]; i++) {
-            sizes[i] = r[i + 1] - r[i];
-          }
-          return ShapeGuard.counts(
-              sizes,
-              2 * Math.PI * innerRadius,
-              2 * Math.PI * outerRadius,
-              height,
-              c,
-              1,
-              grading.at("inner") != 1 || grading.at("outer") != 1,
-              ShapeGuard.ASPECT);
-        });
+        given,
+        step,
+        c ->
+            new ShapeGuard.Probe(
+                RoundGrid.pipeSector(
+                    wallRadii(innerRadius, outerRadius, nRadial, c[0], grading),
+                    ShapeGuard.extremeLayers(axialPlanes(height, nz, c[2], grading)),
+                    c[1]),
+                0),
+        c -> (double) c[0] * c[1] * c[2]);
   }
 
   /**
@@ -450,6 +469,44 @@ public final class StructuredMesher {
       int order,
       Grading grading,
       boolean asGiven) {
+    Args.order(order);
+    int[] n = pipeCells(innerRadius, outerRadius, height, nRadial, nAround, nz, grading, asGiven);
+    Args.size((double) n[1] * n[0] * n[2], (double) n[1] * (n[0] + 1) * (n[2] + 1.0), order);
+    HexGrid grid =
+        RoundGrid.pipe(
+            wallRadii(innerRadius, outerRadius, nRadial, n[0], grading),
+            axialPlanes(height, nz, n[2], grading),
+            n[1]);
+    TetMesh mesh = finish(grid, order);
+    return order == 2 ? CircleSnap.snap(mesh, innerRadius, outerRadius) : mesh;
+  }
+
+  private static TetMesh finish(HexGrid grid, int order) {
+    TetMesh linear = KuhnSplit.toTetMesh(grid);
+    return order == 2 ? MidEdgeNodes.promote(linear) : linear;
+  }
+
+  private static void checkCylinder(
+      double radius, double height, int nRadial, int nAround, int nz, Grading grading) {
+    grading.onlyFaces(CYLINDER_FACES, "cylinder");
+    Args.length("radius", radius);
+    Args.length("height", height);
+    Args.count("cells across the radius", nRadial);
+    Args.count("cells along the height", nz);
+    if (nAround < 8 || nAround % 4 != 0) {
+      throw new IllegalArgumentException(
+          "cells around: found " + nAround + ", expected a multiple of 4, at least 8");
+    }
+  }
+
+  private static void checkPipe(
+      double innerRadius,
+      double outerRadius,
+      double height,
+      int nRadial,
+      int nAround,
+      int nz,
+      Grading grading) {
     grading.onlyFaces(PIPE_FACES, "pipe");
     Args.length("inner radius", innerRadius);
     Args.length("outer radius", outerRadius);
@@ -464,30 +521,10 @@ public final class StructuredMesher {
     }
     Args.count("cells across the wall", nRadial);
     Args.count("cells along the height", nz);
-    Args.order(order);
     if (nAround < 3) {
       throw new IllegalArgumentException(
           "cells around: found " + nAround + ", expected at least 3");
     }
-    int[] n = pipeCells(innerRadius, outerRadius, height, nRadial, nAround, nz, grading, asGiven);
-    Args.size((double) n[1] * n[0] * n[2], (double) n[1] * (n[0] + 1) * (n[2] + 1.0), order);
-    HexGrid grid =
-        RoundGrid.pipe(
-            Grading.planes(
-                innerRadius,
-                outerRadius - innerRadius,
-                n[0],
-                grading.at("inner"),
-                grading.at("outer")),
-            Grading.planes(0, height, n[2], grading.at("bottom"), grading.at("top")),
-            n[1]);
-    TetMesh mesh = finish(grid, order);
-    return order == 2 ? CircleSnap.snap(mesh, innerRadius, outerRadius) : mesh;
-  }
-
-  private static TetMesh finish(HexGrid grid, int order) {
-    TetMesh linear = KuhnSplit.toTetMesh(grid);
-    return order == 2 ? MidEdgeNodes.promote(linear) : linear;
   }
 
   private static void checkBox(double lx, double ly, double lz, int nx, int ny, int nz, int order) {

@@ -4,6 +4,8 @@ import dev.soakfield.mesh.gen.Grading;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
 import picocli.CommandLine.Option;
 
 /** {@code --grade FACE:RATIO}, repeatable: cells growing geometrically away from named faces. */
@@ -16,8 +18,14 @@ final class GradeOption {
               + " from FACE (e.g. xmin:1.2 or inner:1.15); repeat for more faces.")
   List<String> grades = List.of();
 
-  Grading grading() {
+  /**
+   * The ratios by face, each face one of {@code faces} and named once.
+   *
+   * @throws UserInputException naming the option, what was found and what was expected
+   */
+  Grading grading(Set<String> faces, String shape) {
     Map<String, Double> ratios = new LinkedHashMap<>();
+    Map<String, String> given = new LinkedHashMap<>();
     for (String g : grades) {
       int colon = g.lastIndexOf(':');
       double r = Double.NaN;
@@ -32,7 +40,28 @@ final class GradeOption {
         throw new UserInputException(
             "--grade: found '" + g + "', expected FACE:RATIO with a ratio above 0, e.g. xmin:1.2");
       }
-      ratios.put(g.substring(0, colon).strip(), r);
+      String face = g.substring(0, colon).strip();
+      if (!faces.contains(face)) {
+        throw new UserInputException(
+            "--grade: found face '"
+                + face
+                + "', expected a face of the "
+                + shape
+                + ": "
+                + String.join(", ", new TreeSet<>(faces)));
+      }
+      String before = given.put(face, g);
+      if (before != null) {
+        throw new UserInputException(
+            "--grade: found face '"
+                + face
+                + "' twice ('"
+                + before
+                + "' and '"
+                + g
+                + "'), expected each face at most once");
+      }
+      ratios.put(face, r);
     }
     try {
       return Grading.of(ratios);

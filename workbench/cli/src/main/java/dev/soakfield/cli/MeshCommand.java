@@ -1,6 +1,7 @@
 package dev.soakfield.cli;
 
 import dev.soakfield.mesh.TetMesh;
+import dev.soakfield.mesh.gen.Grading;
 import dev.soakfield.mesh.gen.StructuredMesher;
 import java.util.ArrayList;
 import java.util.List;
@@ -52,7 +53,9 @@ final class MeshCommand implements Runnable {
       try {
         mesh = build();
       } catch (IllegalArgumentException e) {
-        throw new UserInputException(e.getMessage());
+        // a refusal after raising the counts (mesh size) says so, or the user sees no reason
+        throw new UserInputException(
+            note().isEmpty() ? e.getMessage() : e.getMessage() + " (" + note() + ")");
       }
       if (!note().isEmpty()) {
         spec.commandLine().getOut().println(note());
@@ -91,7 +94,14 @@ final class MeshCommand implements Runnable {
       double[] l = Lengths.parseList(size, 3, "--size");
       int[] n = Lengths.parseCounts(cells, 3, "--cells");
       return StructuredMesher.box(
-          l[0], l[1], l[2], n[0], n[1], n[2], output.order(), grade.grading());
+          l[0],
+          l[1],
+          l[2],
+          n[0],
+          n[1],
+          n[2],
+          output.order(),
+          grade.grading(StructuredMesher.BOX_FACES, "box"));
     }
   }
 
@@ -220,11 +230,11 @@ final class MeshCommand implements Runnable {
       int[] n = Lengths.parseCounts(cells, 3, "--cells");
       double r = Lengths.parse(radius, "--radius");
       double h = Lengths.parse(height, "--height");
-      round.used(
-          n,
-          StructuredMesher.cylinderCells(r, h, n[0], n[1], n[2], grade.grading(), round.asGiven));
+      Grading grading = grade.grading(StructuredMesher.CYLINDER_FACES, "cylinder");
+      round.settle(
+          n, () -> StructuredMesher.cylinderCells(r, h, n[0], n[1], n[2], grading, round.asGiven));
       return StructuredMesher.cylinder(
-          r, h, n[0], n[1], n[2], output.order(), grade.grading(), round.asGiven);
+          r, h, n[0], n[1], n[2], output.order(), grading, round.asGiven);
     }
 
     @Override
@@ -272,14 +282,11 @@ final class MeshCommand implements Runnable {
       double ri = Lengths.parse(inner, "--inner-radius");
       double ro = Lengths.parse(outer, "--outer-radius");
       double h = Lengths.parse(height, "--height");
-      if (ri < ro) {
-        round.used(
-            n,
-            StructuredMesher.pipeCells(
-                ri, ro, h, n[0], n[1], n[2], grade.grading(), round.asGiven));
-      }
+      Grading grading = grade.grading(StructuredMesher.PIPE_FACES, "pipe");
+      round.settle(
+          n, () -> StructuredMesher.pipeCells(ri, ro, h, n[0], n[1], n[2], grading, round.asGiven));
       return StructuredMesher.pipe(
-          ri, ro, h, n[0], n[1], n[2], output.order(), grade.grading(), round.asGiven);
+          ri, ro, h, n[0], n[1], n[2], output.order(), grading, round.asGiven);
     }
 
     @Override

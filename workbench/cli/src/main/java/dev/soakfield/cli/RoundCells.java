@@ -1,6 +1,8 @@
 package dev.soakfield.cli;
 
+import dev.soakfield.mesh.gen.CellCountsException;
 import java.util.Arrays;
+import java.util.function.Supplier;
 import picocli.CommandLine.Option;
 
 /**
@@ -11,26 +13,42 @@ final class RoundCells {
   @Option(
       names = "--cells-as-given",
       description =
-          "Keep the cell counts exactly; by default the around and axial counts (and the radial"
-              + " one of an ungraded wall) are raised where a cell would be more than 4 times"
-              + " longer than thin, so that no tetrahedron has a dihedral angle under 10°.")
+          "Keep the cell counts exactly; by default a count is raised where a cell's tetrahedra"
+              + " would have a dihedral angle under 10° (a graded direction by cutting each of its"
+              + " cells into equal ones).")
   boolean asGiven;
 
   private String note = "";
 
-  void used(int[] given, int[] used) {
+  /**
+   * Asks the mesher for the counts it will use and keeps the note for them.
+   *
+   * @throws UserInputException when the mesher refuses to raise the counts that far
+   */
+  void settle(int[] given, Supplier<int[]> counts) {
+    int[] used;
+    try {
+      used = counts.get();
+    } catch (CellCountsException e) {
+      throw new UserInputException(
+          String.format(
+              "--cells: found %s, whose tetrahedra would have dihedral angles under 10°, expected"
+                  + " counts that keep them at 10° or more within %,.0f tetrahedra; raising them"
+                  + " reached %s (%,.0f tetrahedra) without settling: the thinnest cell sets the"
+                  + " size of the others, so a gentler --grade ratio or fewer cells across needs"
+                  + " fewer; --cells-as-given keeps the counts (with flat tetrahedra)",
+              CellCountsException.joined(e.given()),
+              e.cap(),
+              CellCountsException.joined(e.reached()),
+              e.reachedTets()));
+    }
     note =
         Arrays.equals(given, used)
             ? ""
             : String.format(
-                    "cells raised from %d,%d,%d to %d,%d,%d so that no cell is more than 4 times"
-                        + " longer than thin (flat tetrahedra, dihedral angles under 10°, spoil the"
-                        + " solve); --cells-as-given keeps the counts",
-                    given[0], given[1], given[2], used[0], used[1], used[2])
-                + (6.0 * used[0] * used[1] * used[2] > 2e6
-                    ? "; the thinnest cell across the wall sets the others, so a gentler --grade"
-                        + " ratio or fewer cells across makes a smaller mesh"
-                    : "");
+                "cells raised from %s to %s so that no tetrahedron has a dihedral angle under 10°"
+                    + " (flat tetrahedra spoil the solve); --cells-as-given keeps the counts",
+                CellCountsException.joined(given), CellCountsException.joined(used));
   }
 
   String note() {

@@ -189,7 +189,54 @@ class MeshAndInfoCommandTest {
             "--out",
             dir.resolve("x.msh").toString());
     assertEquals(2, face.exitCode());
-    assertTrue(face.err().contains("expected a face of the box: xmax, xmin"), face.err());
+    assertTrue(
+        face.err().contains("--grade: found face 'inner', expected a face of the box: xmax, xmin"),
+        face.err());
+    CliRun twice =
+        CliRun.of(
+            "mesh",
+            "pipe",
+            "--inner-radius",
+            "50mm",
+            "--outer-radius",
+            "60mm",
+            "--height",
+            "20mm",
+            "--cells",
+            "4,24,1",
+            "--grade",
+            "inner:1.2",
+            "--grade",
+            "inner:1.3",
+            "--out",
+            dir.resolve("x.msh").toString());
+    assertEquals(ExitCodes.BAD_INPUT, twice.exitCode());
+    assertTrue(
+        twice.err().contains("--grade: found face 'inner' twice ('inner:1.2' and 'inner:1.3')"),
+        twice.err());
+    // a grading no counts can follow (cells 146 times apart across the wall) is refused, naming
+    // the counts reached and the way out
+    CliRun steep =
+        CliRun.of(
+            "mesh",
+            "pipe",
+            "--inner-radius",
+            "50mm",
+            "--outer-radius",
+            "60mm",
+            "--height",
+            "100mm",
+            "--cells",
+            "20,72,4",
+            "--grade",
+            "inner:1.3",
+            "--out",
+            dir.resolve("x.msh").toString());
+    assertEquals(ExitCodes.BAD_INPUT, steep.exitCode());
+    assertTrue(steep.err().contains("--cells: found 20,72,4"), steep.err());
+    assertTrue(steep.err().contains("--cells-as-given"), steep.err());
+    assertTrue(steep.err().contains("raising them reached 20,"), steep.err());
+    assertFalse(steep.err().contains("at dev.soakfield"), steep.err());
     CliRun ratio =
         CliRun.of(
             "mesh",
@@ -219,7 +266,8 @@ class MeshAndInfoCommandTest {
             "--out",
             dir.resolve("pipe.msh").toString());
     assertEquals(0, pipe.exitCode(), pipe.err());
-    assertTrue(pipe.out().contains("cells raised from 4,24,1 to 4,"), pipe.out());
+    // 50 mm around, 2.5 mm across, 20 mm long: 27 around and 2 along bring every angle to 10°
+    assertTrue(pipe.out().contains("cells raised from 4,24,1 to 4,27,2"), pipe.out());
     CliRun kept =
         CliRun.of(
             "mesh",
