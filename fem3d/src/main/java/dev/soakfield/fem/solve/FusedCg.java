@@ -62,7 +62,7 @@ final class FusedCg {
         parts,
         s -> {
           double norm = 0;
-          for (int i = RowSlices.start(n, parts, s); i < RowSlices.start(n, parts, s + 1); i++) {
+          for (int i = from(n, parts, s), to = from(n, parts, s + 1); i < to; i++) {
             double ri = b[i] - row(rs, cols, values, i, x);
             r[i] = ri;
             double e = ri * inverseDiagonal[i];
@@ -80,7 +80,7 @@ final class FusedCg {
       RowSlices.run(
           parts,
           s -> {
-            for (int i = RowSlices.start(n, parts, s); i < RowSlices.start(n, parts, s + 1); i++) {
+            for (int i = from(n, parts, s), to = from(n, parts, s + 1); i < to; i++) {
               p[i] = inverseDiagonal[i] * r[i];
             }
           });
@@ -93,7 +93,7 @@ final class FusedCg {
           parts,
           s -> {
             double pq = 0;
-            for (int i = RowSlices.start(n, parts, s); i < RowSlices.start(n, parts, s + 1); i++) {
+            for (int i = from(n, parts, s), to = from(n, parts, s + 1); i < to; i++) {
               double qi = row(rs, cols, values, i, p);
               q[i] = qi;
               pq += p[i] * qi;
@@ -109,7 +109,7 @@ final class FusedCg {
           s -> {
             double norm = 0;
             double rz = 0;
-            for (int i = RowSlices.start(n, parts, s); i < RowSlices.start(n, parts, s + 1); i++) {
+            for (int i = from(n, parts, s), to = from(n, parts, s + 1); i < to; i++) {
               x[i] += alpha * p[i];
               double ri = r[i] - alpha * q[i];
               r[i] = ri;
@@ -137,7 +137,7 @@ final class FusedCg {
       RowSlices.run(
           parts,
           s -> {
-            for (int i = RowSlices.start(n, parts, s); i < RowSlices.start(n, parts, s + 1); i++) {
+            for (int i = from(n, parts, s), to = from(n, parts, s + 1); i < to; i++) {
               double zi = jacobi ? inverseDiagonal[i] * r[i] : z[i];
               p[i] = zi + beta * p[i];
             }
@@ -156,7 +156,7 @@ final class FusedCg {
         parts,
         s -> {
           double rz = 0;
-          for (int i = RowSlices.start(n, parts, s); i < RowSlices.start(n, parts, s + 1); i++) {
+          for (int i = from(n, parts, s), to = from(n, parts, s + 1); i < to; i++) {
             rz += r[i] * (amg == null ? inverseDiagonal[i] * r[i] : z[i]);
           }
           partial[s] = rz;
@@ -170,6 +170,11 @@ final class FusedCg {
       s += values[k] * v[cols[k]];
     }
     return s;
+  }
+
+  /** First row of slice s (its bounds are computed once per pass, not per row: a long division). */
+  private static int from(int n, int parts, int s) {
+    return RowSlices.start(n, parts, s);
   }
 
   private static double sum(double[] partial, int parts, int offset) {
