@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
-import java.nio.FloatBuffer;
 import java.nio.LongBuffer;
 import java.nio.charset.StandardCharsets;
 
@@ -136,10 +135,11 @@ final class VtkArray {
     switch (type) {
       case FLOAT64 -> buf.asDoubleBuffer().put(doubles, from, to - from);
       case FLOAT32 -> {
-        FloatBuffer f = buf.asFloatBuffer();
+        float[] narrowed = new float[to - from]; // one bulk put beats a checked put per value
         for (int i = from; i < to; i++) {
-          f.put((float) doubles[i]);
+          narrowed[i - from] = (float) doubles[i];
         }
+        buf.asFloatBuffer().put(narrowed);
       }
       case INT64 -> {
         LongBuffer l = buf.asLongBuffer();
