@@ -4,8 +4,8 @@ import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.casefile.MaterialSpec;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.topo.PartRemoval;
-import java.util.HashSet;
 import java.util.Set;
+import java.util.TreeSet;
 
 /**
  * Parts marked {@code "impermeable": true} take no part in a run: they are taken out of the mesh
@@ -17,12 +17,18 @@ public final class ImpermeableParts {
 
   /** The mesh the run works on: without the case's impermeable parts. */
   public static TetMesh removedFrom(CaseSpec spec, TetMesh mesh) {
-    Set<String> parts = new HashSet<>();
+    Set<String> parts = names(spec);
+    return parts.isEmpty() ? mesh : PartRemoval.without(mesh, parts);
+  }
+
+  /** The volume groups of the case's impermeable parts, in name order. */
+  public static Set<String> names(CaseSpec spec) {
+    Set<String> parts = new TreeSet<>();
     for (MaterialSpec m : spec.materials().values()) {
       if (m.impermeable()) {
         parts.add(m.volumeGroup());
       }
     }
-    return parts.isEmpty() ? mesh : PartRemoval.without(mesh, parts);
+    return parts;
   }
 }

@@ -3,7 +3,8 @@ package dev.soakfield.fem.results;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.vtk.PvdEntry;
 import dev.soakfield.mesh.vtk.PvdWriter;
-import dev.soakfield.mesh.vtk.VtuFormat;
+import dev.soakfield.mesh.vtk.VtuEncoding;
+import dev.soakfield.mesh.vtk.VtuFrameWriter;
 import dev.soakfield.mesh.vtk.VtuWriter;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -14,34 +15,33 @@ import java.util.Locale;
 
 /**
  * The field frames of a run: one VTU file per output time under {@code fields/} (nodal fields given
- * by the caller, the part index per tetrahedron added here), listed in {@code fields.pvd} when the
- * run finishes.
+ * by the caller, the part index per tetrahedron added here as {@code group}), listed in {@code
+ * fields.pvd} when the run finishes. The mesh is encoded for the first frame only and copied into
+ * the others ({@link VtuFrameWriter}).
  */
 public final class FrameWriter {
+  /** Cell data: the volume group index of each tetrahedron. */
+  public static final String GROUP = "group";
+
   private final Path folder;
-  private final TetMesh mesh;
+  private final VtuFrameWriter vtu;
   private final List<PvdEntry> frames = new ArrayList<>();
 
+  /** Frames with Float32 fields, uncompressed. */
   public FrameWriter(Path folder, TetMesh mesh) throws IOException {
+    this(folder, mesh, VtuEncoding.DEFAULT);
+  }
+
+  public FrameWriter(Path folder, TetMesh mesh, VtuEncoding encoding) throws IOException {
     this.folder = folder;
-    this.mesh = mesh;
+    this.vtu = new VtuFrameWriter(mesh, GROUP, encoding);
     Files.createDirectories(folder.resolve("fields"));
   }
 
   /** Writes the frame at time t with these nodal fields. */
   public void write(double t, List<VtuWriter.Field> pointFields) throws IOException {
     String name = String.format(Locale.ROOT, "fields/c_%04d.vtu", frames.size());
-    double[] group = new double[mesh.tetCount()];
-    for (int e = 0; e < group.length; e++) {
-      group[e] = mesh.tetGroup(e);
-    }
-    VtuWriter.write(
-        folder.resolve(name),
-        mesh,
-        pointFields,
-        List.of(new VtuWriter.Field("group", 1, group)),
-        VtuFormat.APPENDED_BASE64,
-        false);
+    vtu.write(folder.resolve(name), pointFields);
     frames.add(new PvdEntry(t, name));
   }
 

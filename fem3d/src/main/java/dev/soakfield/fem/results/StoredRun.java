@@ -4,8 +4,6 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.soakfield.mesh.MeshInputException;
 import dev.soakfield.mesh.TetMesh;
-import dev.soakfield.mesh.load.MeshLoader;
-import dev.soakfield.mesh.topo.AssemblyOptions;
 import dev.soakfield.mesh.vtk.PvdEntry;
 import dev.soakfield.mesh.vtk.PvdReader;
 import dev.soakfield.mesh.vtk.VtuGrid;
@@ -72,7 +70,7 @@ public final class StoredRun {
     List<PvdEntry> frames = PvdReader.read(pvd);
     Optional<JsonNode> summary = readSummary(folder.resolve(ResultFiles.SUMMARY));
     Path meshFile = meshFile(folder, summary);
-    TetMesh mesh = MeshLoader.load(meshFile, AssemblyOptions.defaults()).mesh();
+    TetMesh mesh = MeshAsRun.read(meshFile, summary);
     StoredRun r =
         new StoredRun(
             folder,
@@ -125,7 +123,8 @@ public final class StoredRun {
     return p;
   }
 
-  private static Optional<JsonNode> readSummary(Path file) {
+  /** summary.json of a result folder, when there is one. */
+  static Optional<JsonNode> readSummary(Path file) {
     if (!Files.isRegularFile(file)) {
       return Optional.empty();
     }

@@ -6,11 +6,10 @@ import dev.soakfield.fem.casefile.CaseReader;
 import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.model.DiffusionModel;
 import dev.soakfield.fem.model.ModelBuilder;
+import dev.soakfield.fem.results.MeshAsRun;
 import dev.soakfield.fem.results.ResultFolderException;
 import dev.soakfield.fem.time.ThetaStepper;
 import dev.soakfield.mesh.TetMesh;
-import dev.soakfield.mesh.load.MeshLoader;
-import dev.soakfield.mesh.topo.AssemblyOptions;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -53,7 +52,7 @@ public record ModelFromResults(
           folder + ": its case copy no longer reads: " + e.getMessage());
     }
     CaseSpec spec = read.withMesh(meshCopy);
-    TetMesh mesh = MeshLoader.load(meshCopy, AssemblyOptions.defaults()).mesh();
+    TetMesh mesh = MeshAsRun.inFolder(folder);
     DiffusionModel model = ModelBuilder.build(spec, mesh, new ArrayList<>());
     boolean lumped = spec.time().capacity() == CapacityForm.LUMPED;
     ThetaStepper stepper =

@@ -2,6 +2,7 @@ package dev.soakfield.fem.run;
 
 import dev.soakfield.fem.model.LawResolver;
 import dev.soakfield.fem.results.ResultFolder;
+import dev.soakfield.mesh.vtk.VtuEncoding;
 import java.util.Objects;
 
 /**
@@ -17,6 +18,7 @@ import java.util.Objects;
  * @param resume go on from the checkpoint of an interrupted run in the output folder
  * @param completion what is made of the results before the folder says finished (the report and its
  *     pictures), so that "finished" means all of it is there
+ * @param frameEncoding how the field frames store their numbers (Float32 fields by default)
  */
 public record RunOptions(
     boolean force,
@@ -26,7 +28,8 @@ public record RunOptions(
     int checkpointSteps,
     double checkpointSeconds,
     boolean resume,
-    ResultFolder.Completion completion) {
+    ResultFolder.Completion completion,
+    VtuEncoding frameEncoding) {
   /** Checkpoints by default: every 500 steps or 60 s of wall time, whichever comes first. */
   public static final int DEFAULT_CHECKPOINT_STEPS = 500;
 
@@ -36,6 +39,7 @@ public record RunOptions(
     Objects.requireNonNull(toolVersion, "toolVersion");
     Objects.requireNonNull(laws, "laws");
     Objects.requireNonNull(completion, "completion");
+    Objects.requireNonNull(frameEncoding, "frameEncoding");
     if (checkpointSteps < 0 || !(checkpointSeconds >= 0)) {
       throw new IllegalArgumentException("checkpoint intervals must not be negative");
     }
@@ -44,18 +48,35 @@ public record RunOptions(
   /** These options with {@code laws}. */
   public RunOptions withLaws(LawResolver laws) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
+        force,
+        toolVersion,
+        maxHeap,
+        laws,
+        checkpointSteps,
+        checkpointSeconds,
+        resume,
+        completion,
+        frameEncoding);
   }
 
   /** These options with {@code resume}. */
   public RunOptions withResume(boolean resume) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
+        force,
+        toolVersion,
+        maxHeap,
+        laws,
+        checkpointSteps,
+        checkpointSeconds,
+        resume,
+        completion,
+        frameEncoding);
   }
 
   /** These options with checkpoint intervals. */
   public RunOptions withCheckpoints(int steps, double seconds) {
-    return new RunOptions(force, toolVersion, maxHeap, laws, steps, seconds, resume, completion);
+    return new RunOptions(
+        force, toolVersion, maxHeap, laws, steps, seconds, resume, completion, frameEncoding);
   }
 
   /** No force, this JVM's heap, the version of the fem3d package (or "development build"). */
@@ -69,30 +90,77 @@ public record RunOptions(
         DEFAULT_CHECKPOINT_STEPS,
         DEFAULT_CHECKPOINT_SECONDS,
         false,
-        ResultFolder.Completion.NONE);
+        ResultFolder.Completion.NONE,
+        VtuEncoding.DEFAULT);
   }
 
   /** These options with {@code force}. */
   public RunOptions withForce(boolean force) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
+        force,
+        toolVersion,
+        maxHeap,
+        laws,
+        checkpointSteps,
+        checkpointSeconds,
+        resume,
+        completion,
+        frameEncoding);
   }
 
   /** These options with {@code version}. */
   public RunOptions withToolVersion(String version) {
     return new RunOptions(
-        force, version, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
+        force,
+        version,
+        maxHeap,
+        laws,
+        checkpointSteps,
+        checkpointSeconds,
+        resume,
+        completion,
+        frameEncoding);
   }
 
   /** These options with {@code completion} run before the folder says finished. */
   public RunOptions withCompletion(ResultFolder.Completion completion) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
+        force,
+        toolVersion,
+        maxHeap,
+        laws,
+        checkpointSteps,
+        checkpointSeconds,
+        resume,
+        completion,
+        frameEncoding);
   }
 
   /** These options with {@code maxHeap}. */
   public RunOptions withMaxHeap(long maxHeap) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, checkpointSteps, checkpointSeconds, resume, completion);
+        force,
+        toolVersion,
+        maxHeap,
+        laws,
+        checkpointSteps,
+        checkpointSeconds,
+        resume,
+        completion,
+        frameEncoding);
+  }
+
+  /** These options with the frames stored as {@code encoding} says (precision, compression). */
+  public RunOptions withFrameEncoding(VtuEncoding encoding) {
+    return new RunOptions(
+        force,
+        toolVersion,
+        maxHeap,
+        laws,
+        checkpointSteps,
+        checkpointSeconds,
+        resume,
+        completion,
+        encoding);
   }
 }

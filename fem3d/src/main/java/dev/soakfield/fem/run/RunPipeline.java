@@ -28,7 +28,6 @@ import dev.soakfield.mesh.MeshInputException;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.gen.MidEdgeNodes;
 import dev.soakfield.mesh.load.MeshLoader;
-import dev.soakfield.mesh.msh.MshWriter;
 import dev.soakfield.mesh.topo.AssemblyOptions;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -196,7 +195,10 @@ public final class RunPipeline {
     RunLog log;
     try {
       log = new RunLog(folder.work().resolve(RunLog.FILE));
-      AtomicFiles.write(folder.work().resolve(MESH_COPY), f -> MshWriter.write(f, mesh, true));
+      // the user's file as it is, byte for byte: readers derive the run's mesh from it (MeshAsRun)
+      AtomicFiles.write(
+          folder.work().resolve(MESH_COPY),
+          f -> Files.copy(spec.mesh(), f, StandardCopyOption.REPLACE_EXISTING));
       AtomicFiles.write(
           folder.work().resolve(CASE_COPY),
           f -> Files.copy(caseFile, f, StandardCopyOption.REPLACE_EXISTING));
@@ -223,7 +225,14 @@ public final class RunPipeline {
       try {
         recorder =
             new RunRecorder(
-                folder.work(), spec, model, stepper, RunProgress.SILENT, warnings, resumeFrom);
+                folder.work(),
+                spec,
+                model,
+                stepper,
+                RunProgress.SILENT,
+                warnings,
+                resumeFrom,
+                options.frameEncoding());
         RunCursor cursor = null;
         if (resumeFrom != null) {
           stepper.restoreLawStates(Checkpointer.lawStates(resumeFrom));

@@ -18,6 +18,7 @@ import dev.soakfield.fem.time.StepListener;
 import dev.soakfield.fem.time.StepOutcome;
 import dev.soakfield.fem.time.ThetaStepper;
 import dev.soakfield.mesh.TetMesh;
+import dev.soakfield.mesh.vtk.VtuEncoding;
 import dev.soakfield.mesh.vtk.VtuWriter;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -74,12 +75,13 @@ final class RunRecorder implements StepListener, AutoCloseable {
       RunProgress progress,
       List<String> warnings)
       throws IOException {
-    this(dir, spec, model, stepper, progress, warnings, null);
+    this(dir, spec, model, stepper, progress, warnings, null, VtuEncoding.DEFAULT);
   }
 
   /**
    * A recorder that goes on from a checkpoint when {@code resume} is given: the series keeps the
-   * rows the checkpoint saw, and every accumulated figure comes back from it.
+   * rows the checkpoint saw, and every accumulated figure comes back from it; frames are stored as
+   * {@code frameEncoding} says.
    */
   RunRecorder(
       Path dir,
@@ -88,7 +90,8 @@ final class RunRecorder implements StepListener, AutoCloseable {
       ThetaStepper stepper,
       RunProgress progress,
       List<String> warnings,
-      StateBundle resume)
+      StateBundle resume,
+      VtuEncoding frameEncoding)
       throws IOException {
     this.dir = dir;
     this.spec = spec;
@@ -136,7 +139,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     balance = new BalanceLedger(mesh.faceGroups().size(), stepper.amount(model.initialPhi(), 0.0));
     partAmounts0 = totalAmounts(model.initialPhi(), 0.0);
     stop = new StopRule(spec, mesh);
-    frames = new FrameWriter(dir, mesh);
+    frames = new FrameWriter(dir, mesh, frameEncoding);
     series =
         new SeriesWriter(
             dir.resolve(ResultFiles.SERIES),

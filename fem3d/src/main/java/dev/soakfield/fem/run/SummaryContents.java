@@ -2,6 +2,8 @@ package dev.soakfield.fem.run;
 
 import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.model.DiffusionModel;
+import dev.soakfield.fem.model.ImpermeableParts;
+import dev.soakfield.fem.results.MeshAsRun;
 import dev.soakfield.fem.time.RunTotals;
 import dev.soakfield.mesh.TetMesh;
 import java.util.LinkedHashMap;
@@ -35,6 +37,8 @@ final class SummaryContents {
     m.put("nodes", mesh.nodeCount());
     m.put("tets", mesh.tetCount());
     m.put("order", mesh.order());
+    // mesh.msh is the user's file as it is: this says what the run took out of it
+    m.put(MeshAsRun.REMOVED_PARTS, List.copyOf(ImpermeableParts.names(spec)));
     root.put("mesh", m);
     Map<String, Object> solver = new LinkedHashMap<>();
     solver.put("steps", totals.steps());

@@ -4,16 +4,19 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
+import java.nio.LongBuffer;
 import java.nio.charset.StandardCharsets;
 
 /**
  * One VTK DataArray to be written: a name, a VTK scalar type, a component count and the values,
- * held as {@code double[]} (Float64) or {@code int[]} (Int64, Int32, UInt8, widened or narrowed on
- * output). Writes itself as ASCII text or as little-endian bytes.
+ * held as {@code double[]} (Float64, or Float32 rounded to nearest on output) or {@code int[]}
+ * (Int64, Int32, UInt8, widened or narrowed on output). Writes itself as ASCII text or as
+ * little-endian bytes.
  */
 final class VtkArray {
   enum Type {
     FLOAT64("Float64", 8),
+    FLOAT32("Float32", 4),
     INT64("Int64", 8),
     INT32("Int32", 4),
     UINT8("UInt8", 1);
@@ -60,6 +63,14 @@ final class VtkArray {
     return new VtkArray(name, unit, Type.FLOAT64, components, values, null);
   }
 
+  /** A floating-point array written as {@code type} (Float64 or Float32). */
+  static VtkArray floats(String name, String unit, Type type, int components, double[] values) {
+    if (type != Type.FLOAT64 && type != Type.FLOAT32) {
+      throw new IllegalArgumentException("not a floating-point type: " + type);
+    }
+    return new VtkArray(name, unit, type, components, values, null);
+  }
+
   static VtkArray integers(String name, Type type, int components, int[] values) {
     return new VtkArray(name, type, components, null, values);
   }
@@ -98,19 +109,50 @@ final class VtkArray {
   /** The values as little-endian bytes, without a header. */
   void writeBytes(OutputStream out) throws IOException {
     ByteBuffer buf = ByteBuffer.allocate(CHUNK).order(ByteOrder.LITTLE_ENDIAN);
+    int per = CHUNK / type.bytes;
     int n = length();
-    for (int i = 0; i < n; i++) {
-      if (buf.remaining() < 8) {
-        out.write(buf.array(), 0, buf.position());
-        buf.clear();
+    for (int from = 0; from < n; from += per) {
+      int to = Math.min(n, from + per);
+      buf.clear();
+      fill(buf, from, to);
+      out.write(buf.array(), 0, (to - from) * type.bytes);
+    }
+  }
+
+  /** The values as little-endian bytes in one array (for compression). */
+  byte[] toBytes() {
+    long size = byteCount();
+    if (size > Integer.MAX_VALUE - 16) {
+      throw new IllegalArgumentException("array '" + name + "': " + size + " bytes, over 2 GB");
+    }
+    ByteBuffer buf = ByteBuffer.allocate((int) size).order(ByteOrder.LITTLE_ENDIAN);
+    fill(buf, 0, length());
+    return buf.array();
+  }
+
+  /** Puts values from..to-1 at the buffer's start, in bulk where the JDK has a bulk copy. */
+  private void fill(ByteBuffer buf, int from, int to) {
+    switch (type) {
+      case FLOAT64 -> buf.asDoubleBuffer().put(doubles, from, to - from);
+      case FLOAT32 -> {
+        float[] narrowed = new float[to - from]; // one bulk put beats a checked put per value
+        for (int i = from; i < to; i++) {
+          narrowed[i - from] = (float) doubles[i];
+        }
+        buf.asFloatBuffer().put(narrowed);
       }
-      switch (type) {
-        case FLOAT64 -> buf.putDouble(doubles[i]);
-        case INT64 -> buf.putLong(ints[i]);
-        case INT32 -> buf.putInt(ints[i]);
-        case UINT8 -> buf.put((byte) ints[i]);
+      case INT64 -> {
+        LongBuffer l = buf.asLongBuffer();
+        for (int i = from; i < to; i++) {
+          l.put(ints[i]);
+        }
+      }
+      case INT32 -> buf.asIntBuffer().put(ints, from, to - from);
+      case UINT8 -> {
+        for (int i = from; i < to; i++) {
+          buf.put(i - from, (byte) ints[i]);
+        }
       }
     }
-    out.write(buf.array(), 0, buf.position());
   }
 }

@@ -4,11 +4,9 @@ import dev.soakfield.mesh.MeshInputException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.ByteBuffer;
-import java.nio.ByteOrder;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Base64;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -22,8 +20,8 @@ import javax.xml.stream.XMLStreamReader;
 /**
  * Reads back a VTK XML UnstructuredGrid (.vtu) of one piece, as {@link VtuWriter} writes it:
  * DataArrays in ascii, binary (base64 in the element) or appended base64 form, UInt32 or UInt64
- * headers, little endian, uncompressed. Appended raw data is not XML and is refused with a clear
- * message, as is compression.
+ * headers, little endian, uncompressed or zlib-compressed ({@code vtkZLibDataCompressor}). Appended
+ * raw data is not XML and is refused with a clear message, as are other compressors.
  *
  * <p>The layout follows the VTK file-format description ("VTK File Formats", VTK User's Guide, XML
  * section): a binary blob is a byte-count header followed by the data, each base64-encoded as its
@@ -32,8 +30,10 @@ import javax.xml.stream.XMLStreamReader;
 public final class VtuReader {
   private VtuReader() {}
 
+  private static final String ZLIB = "vtkZLibDataCompressor";
+
   /** One DataArray as declared, and its text until decoded. */
-  private static final class Declared {
+  static final class Declared {
     String section;
     String name;
     String type;
@@ -77,6 +77,7 @@ public final class VtuReader {
 
   private static VtuGrid parse(String source, XMLStreamReader x) throws XMLStreamException {
     String headerType = "UInt32";
+    String compressor = "";
     String section = "";
     int points = -1;
     int cells = -1;
@@ -101,12 +102,13 @@ public final class VtuReader {
               throw new MeshInputException(
                   source, "line " + line, "byte_order '" + order + "'", "LittleEndian");
             }
-            if (!attr(x, "compressor", "").isEmpty()) {
+            compressor = attr(x, "compressor", "");
+            if (!compressor.isEmpty() && !compressor.equals(ZLIB)) {
               throw new MeshInputException(
                   source,
                   "line " + line,
-                  "compressed data (" + attr(x, "compressor", "") + ")",
-                  "uncompressed data");
+                  "compressed data (" + compressor + ")",
+                  "uncompressed data or " + ZLIB);
             }
             headerType = attr(x, "header_type", "UInt32");
             if (!headerType.equals("UInt32") && !headerType.equals("UInt64")) {
@@ -183,7 +185,8 @@ public final class VtuReader {
       throw new MeshInputException(source, "", "no Piece element", "one UnstructuredGrid Piece");
     }
     int headerBytes = headerType.equals("UInt64") ? 8 : 4;
-    return assemble(source, points, cells, arrays, appended, headerBytes);
+    Blobs blobs = new Blobs(source, headerBytes, !compressor.isEmpty());
+    return assemble(source, points, cells, arrays, appended, blobs);
   }
 
   private static String stripToMarker(String source, StringBuilder appended) {
@@ -201,7 +204,7 @@ public final class VtuReader {
       int cells,
       List<Declared> arrays,
       StringBuilder appended,
-      int headerBytes) {
+      Blobs blobs) {
     double[] xyz = null;
     int[] conn = null;
     int[] offsets = null;
@@ -212,13 +215,13 @@ public final class VtuReader {
     for (Declared d : arrays) {
       ByteBuffer bytes = null;
       if (d.format.equals("binary")) {
-        bytes = blob(source, d, d.text, 0, headerBytes);
+        bytes = blobs.decode(d, d.text, 0);
       } else if (d.format.equals("appended")) {
         if (appended == null) {
           throw new MeshInputException(
               source, where(d), "an appended array but no AppendedData", "an AppendedData element");
         }
-        bytes = blob(source, d, appended, d.offset, headerBytes);
+        bytes = blobs.decode(d, appended, d.offset);
       }
       switch (d.section) {
         case "Points" -> xyz = doubles(source, d, bytes, 3L * points);
@@ -275,45 +278,7 @@ public final class VtuReader {
     return new VtuGrid(xyz, conn, offsets, types, pointFields, cellFields, comps);
   }
 
-  private static ByteBuffer blob(
-      String source, Declared d, CharSequence text, long offset, int headerBytes) {
-    int start = skipSpace(text, (int) Math.min(offset, text.length()));
-    int headerChars = 4 * ((headerBytes + 2) / 3);
-    if (start + headerChars > text.length()) {
-      throw new MeshInputException(
-          source, where(d), "data ending before its byte count", "a base64 byte-count header");
-    }
-    byte[] head;
-    try {
-      head = Base64.getDecoder().decode(text.subSequence(start, start + headerChars).toString());
-    } catch (IllegalArgumentException e) {
-      throw new MeshInputException(
-          source, where(d), "bad base64 in the byte count (" + e.getMessage() + ")", "base64");
-    }
-    ByteBuffer hb = ByteBuffer.wrap(head).order(ByteOrder.LITTLE_ENDIAN);
-    long n = headerBytes == 8 ? hb.getLong() : Integer.toUnsignedLong(hb.getInt());
-    long dataChars = 4 * ((n + 2) / 3);
-    long from = (long) start + headerChars;
-    if (n > Integer.MAX_VALUE - 16 || from + dataChars > text.length()) {
-      throw new MeshInputException(
-          source,
-          where(d),
-          "a byte count of " + n + " with " + (text.length() - from) + " characters left",
-          "the data the byte count announces");
-    }
-    byte[] data;
-    try {
-      data =
-          Base64.getDecoder()
-              .decode(text.subSequence((int) from, (int) (from + dataChars)).toString());
-    } catch (IllegalArgumentException e) {
-      throw new MeshInputException(
-          source, where(d), "bad base64 data (" + e.getMessage() + ")", "base64");
-    }
-    return ByteBuffer.wrap(data, 0, (int) n).order(ByteOrder.LITTLE_ENDIAN);
-  }
-
-  private static int skipSpace(CharSequence text, int i) {
+  static int skipSpace(CharSequence text, int i) {
     while (i < text.length() && Character.isWhitespace(text.charAt(i))) {
       i++;
     }
@@ -416,7 +381,7 @@ public final class VtuReader {
     return s.isEmpty() ? new String[0] : s.split("\\s+");
   }
 
-  private static String where(Declared d) {
+  static String where(Declared d) {
     return String.format(Locale.ROOT, "DataArray '%s' (line %d)", d.name, d.line);
   }
 

@@ -104,16 +104,7 @@ public final class VtuWriter {
         withVolumeGroup ? List.of(VOLUME_GROUP) : List.of());
 
     int per = mesh.nodesPerTet();
-    int[] conn = mesh.copyTets();
-    if (per == 10) {
-      int[] mshOrder = new int[10];
-      for (int t = 0; t < tets; t++) {
-        System.arraycopy(conn, 10 * t, mshOrder, 0, 10);
-        for (int k = 0; k < 10; k++) {
-          conn[10 * t + k] = mshOrder[TET10_TO_VTK[k]];
-        }
-      }
-    }
+    int[] conn = vtkConnectivity(mesh);
     List<VtkArray> cellData = toArrays(cellFields);
     if (withVolumeGroup) {
       cellData.add(VtkArray.integers(VOLUME_GROUP, VtkArray.Type.INT32, 1, mesh.copyTetGroups()));
@@ -189,6 +180,31 @@ public final class VtuWriter {
             VtkArray.float64("Points", 3, xyz),
             cellArrays(conn, faces, per, per == 3 ? VTK_TRIANGLE : VTK_QUADRATIC_TRIANGLE))
         .write(file, format);
+  }
+
+  /** The tetrahedra's node indices in VTK order (mid-edge nodes 8 and 9 swapped). */
+  static int[] vtkConnectivity(TetMesh mesh) {
+    int[] conn = mesh.copyTets();
+    if (mesh.nodesPerTet() == 10) {
+      int[] mshOrder = new int[10];
+      for (int t = 0; t < mesh.tetCount(); t++) {
+        System.arraycopy(conn, 10 * t, mshOrder, 0, 10);
+        for (int k = 0; k < 10; k++) {
+          conn[10 * t + k] = mshOrder[TET10_TO_VTK[k]];
+        }
+      }
+    }
+    return conn;
+  }
+
+  /** VTK cell type of the mesh's tetrahedra. */
+  static int vtkTetType(TetMesh mesh) {
+    return mesh.nodesPerTet() == 4 ? VTK_TETRA : VTK_QUADRATIC_TETRA;
+  }
+
+  /** Checks point fields against a mesh: lengths that fit, names that do not repeat. */
+  static void checkPointFields(List<Field> fields, int nodes) {
+    checkFields("point", fields, nodes, "node", List.of());
   }
 
   private static List<VtkArray> cellArrays(int[] conn, int cells, int per, int vtkType) {

@@ -38,6 +38,7 @@ final class VtuTestReader {
   final Map<String, Array> arrays = new HashMap<>();
   final String byteOrder;
   final String headerType;
+  final boolean zlib;
 
   private VtuTestReader(Document doc, byte[] rawAppended) throws Exception {
     Element root = doc.getDocumentElement();
@@ -46,6 +47,7 @@ final class VtuTestReader {
     assertEquals("1.0", root.getAttribute("version"));
     byteOrder = root.getAttribute("byte_order");
     headerType = root.getAttribute("header_type");
+    zlib = root.getAttribute("compressor").equals("vtkZLibDataCompressor");
     piece = (Element) root.getElementsByTagName("Piece").item(0);
     String appended = null;
     NodeList app = root.getElementsByTagName("AppendedData");
@@ -72,7 +74,10 @@ final class VtuTestReader {
               type.equals("Float64") ? Double.parseDouble(tokens[k]) : Long.parseLong(tokens[k]);
         }
       } else {
-        if (format.equals("binary")) {
+        if (zlib) {
+          assertEquals("appended", format);
+          bytes = decodeZlibBlob(appended, Integer.parseInt(e.getAttribute("offset")));
+        } else if (format.equals("binary")) {
           bytes = decodeBase64Blob(e.getTextContent().trim(), 0);
         } else {
           assertEquals("appended", format);
@@ -98,6 +103,50 @@ final class VtuTestReader {
     return data;
   }
 
+  /**
+   * A zlib-compressed array (VTK File Formats, XML section): a base64 run of the UInt64 header
+   * [#blocks][block size][last partial block size, 0 if none][compressed size of each block], then
+   * a base64 run of the blocks, each a zlib stream (RFC 1950) of its own.
+   */
+  private static byte[] decodeZlibBlob(String text, int offset) throws Exception {
+    ByteBuffer first =
+        ByteBuffer.wrap(Base64.getDecoder().decode(text.substring(offset, offset + 32)))
+            .order(ByteOrder.LITTLE_ENDIAN);
+    int blocks = (int) first.getLong();
+    int blockSize = (int) first.getLong();
+    int last = (int) first.getLong();
+    int headerChars = (int) (4 * ((8L * (3 + blocks) + 2) / 3));
+    ByteBuffer header =
+        ByteBuffer.wrap(Base64.getDecoder().decode(text.substring(offset, offset + headerChars)))
+            .order(ByteOrder.LITTLE_ENDIAN);
+    header.position(24);
+    int[] sizes = new int[blocks];
+    int total = 0;
+    for (int b = 0; b < blocks; b++) {
+      sizes[b] = (int) header.getLong();
+      total += sizes[b];
+    }
+    int dataChars = (int) (4 * ((total + 2L) / 3));
+    byte[] packed =
+        Base64.getDecoder()
+            .decode(text.substring(offset + headerChars, offset + headerChars + dataChars));
+    java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+    int at = 0;
+    for (int b = 0; b < blocks; b++) {
+      java.util.zip.Inflater inf = new java.util.zip.Inflater();
+      inf.setInput(packed, at, sizes[b]);
+      byte[] block = new byte[blockSize];
+      int n = inf.inflate(block);
+      assertTrue(inf.finished(), "block " + b + " is one whole zlib stream");
+      inf.end();
+      int expected = b == blocks - 1 && last != 0 ? last : blockSize;
+      assertEquals(expected, n, "inflated size of block " + b);
+      out.write(block, 0, n);
+      at += sizes[b];
+    }
+    return out.toByteArray();
+  }
+
   private static byte[] rawBlob(byte[] data, int offset) {
     long count = ByteBuffer.wrap(data, offset, 8).order(ByteOrder.LITTLE_ENDIAN).getLong();
     byte[] out = new byte[(int) count];
@@ -110,7 +159,7 @@ final class VtuTestReader {
     int size =
         switch (type) {
           case "Float64", "Int64" -> 8;
-          case "Int32" -> 4;
+          case "Int32", "Float32" -> 4;
           case "UInt8" -> 1;
           default -> throw new AssertionError("unexpected type " + type);
         };
@@ -122,6 +171,7 @@ final class VtuTestReader {
             case "Float64" -> b.getDouble();
             case "Int64" -> b.getLong();
             case "Int32" -> b.getInt();
+            case "Float32" -> b.getFloat();
             default -> b.get() & 0xff;
           };
     }

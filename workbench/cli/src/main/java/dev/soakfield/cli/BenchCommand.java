@@ -13,7 +13,8 @@ import picocli.CommandLine.Spec;
       MeshImportBench.class,
       SolverBenchCommand.class,
       RunBenchCommand.class,
-      RenderBenchCommand.class
+      RenderBenchCommand.class,
+      OutputBench.class
     })
 final class BenchCommand implements Runnable {
   @Spec CommandSpec spec;

@@ -4,6 +4,7 @@ import dev.soakfield.app.CaseRun;
 import dev.soakfield.fem.laws.SourceLawCatalog;
 import dev.soakfield.fem.run.RunOptions;
 import dev.soakfield.fem.run.RunSummary;
+import dev.soakfield.mesh.vtk.VtuEncoding;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -80,6 +81,20 @@ final class RunCommand implements Callable<Integer> {
       description = "Save a checkpoint when this much wall time passed (default ${DEFAULT-VALUE}).")
   String checkpointEvery;
 
+  @Option(
+      names = "--compress",
+      description =
+          "Compress the field frames (fields/*.vtu) with zlib, as VTK's readers understand it:"
+              + " smaller files, a little more time to write and read.")
+  boolean compress;
+
+  @Option(
+      names = "--float64",
+      description =
+          "Store the frames' fields in double precision (Float64, 16 digits) instead of single"
+              + " (Float32, 7 digits, magnitudes 1.2e-38 to 3.4e38). Points are Float64 either way.")
+  boolean float64;
+
   @Override
   public Integer call() throws Exception {
     if (checkpointSteps < 0) {
@@ -100,7 +115,8 @@ final class RunCommand implements Callable<Integer> {
             .withToolVersion(VersionProvider.version())
             .withLaws(laws.resolver())
             .withCheckpoints(checkpointSteps, checkpointSeconds)
-            .withResume(resume);
+            .withResume(resume)
+            .withFrameEncoding(new VtuEncoding(float64, compress));
     CaseRun.Outcome outcome;
     try {
       outcome = CaseRun.run(caseFile, out, progress, options);

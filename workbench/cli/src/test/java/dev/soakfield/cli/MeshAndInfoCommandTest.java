@@ -317,6 +317,7 @@ class MeshAndInfoCommandTest {
           {"info", "--help"},
           {"bench", "mesh-import", "--help"},
           {"bench", "solver", "--help"},
+          {"bench", "output", "--help"},
           {"run", "--help"},
           {"demo", "--help"},
           {"verify", "--help"}
