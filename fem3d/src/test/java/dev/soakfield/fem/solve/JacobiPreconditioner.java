@@ -5,7 +5,9 @@ import no.uib.cipr.matrix.Vector;
 import no.uib.cipr.matrix.sparse.Preconditioner;
 
 /**
- * z = D⁻¹ r with D the diagonal of the matrix. Overwrites the whole output, so no zeroing needed.
+ * z = D⁻¹ r with D the diagonal of the matrix, as an MTJ preconditioner: for the tests that hold
+ * our fused PCG (which applies D⁻¹ inside its own passes) against MTJ's CG. Overwrites the whole
+ * output, so no zeroing needed.
  */
 final class JacobiPreconditioner implements Preconditioner {
   private final double[] inverseDiagonal;
