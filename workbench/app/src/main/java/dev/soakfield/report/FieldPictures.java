@@ -4,6 +4,7 @@ import dev.soakfield.app.FieldKind;
 import dev.soakfield.app.GraphicsServices;
 import dev.soakfield.app.OrbitCamera;
 import dev.soakfield.app.PictureMaker;
+import dev.soakfield.app.Scene;
 import dev.soakfield.app.Study;
 import dev.soakfield.app.ViewPicture;
 import dev.soakfield.app.ViewSettings;
@@ -11,6 +12,7 @@ import dev.soakfield.fem.results.StoredRun;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Optional;
 
 /**
@@ -47,44 +49,31 @@ public final class FieldPictures {
       Files.createDirectories(folder);
       int last = r.get().frameCount() - 1;
       int widest = widestSpread(r.get());
+      ViewSettings settings = new ViewSettings();
+      settings.field(Optional.of(FieldKind.CONCENTRATION));
+      Scene scene = null; // one scene for every picture: its surface is built once
       for (int frame : widest == last ? new int[] {last} : new int[] {widest, last}) {
         String name = frame == last ? "field-c-end" : "field-c-widest-spread";
-        draw(maker.get(), study, r.get(), frame, Optional.empty(), folder.resolve(name + ".png"));
-        draw(
-            maker.get(),
-            study,
-            r.get(),
-            frame,
-            Optional.of(mid),
-            folder.resolve(name + "-section.png"));
+        for (Optional<ViewSettings.Plane> section :
+            List.of(Optional.<ViewSettings.Plane>empty(), Optional.of(mid))) {
+          settings.frame(frame);
+          settings.section(section);
+          scene = scene == null ? new Scene(study, settings) : scene;
+          ViewPicture.write(
+              maker.get(),
+              study,
+              scene,
+              OrbitCamera.View.ISO,
+              WIDTH,
+              HEIGHT,
+              r.get().units().concentration(),
+              folder.resolve(name + (section.isEmpty() ? "" : "-section") + ".png"));
+        }
       }
       return Optional.empty();
     } catch (IOException | RuntimeException | LinkageError e) {
       return Optional.of(String.valueOf(e.getMessage()));
     }
-  }
-
-  private static void draw(
-      PictureMaker maker,
-      Study study,
-      StoredRun results,
-      int frame,
-      Optional<ViewSettings.Plane> section,
-      Path file)
-      throws IOException {
-    ViewSettings settings = new ViewSettings();
-    settings.field(Optional.of(FieldKind.CONCENTRATION));
-    settings.frame(frame);
-    settings.section(section);
-    ViewPicture.write(
-        maker,
-        study,
-        settings,
-        OrbitCamera.View.ISO,
-        WIDTH,
-        HEIGHT,
-        results.units().concentration(),
-        file);
   }
 
   /** The frame whose concentration has the largest standard deviation over the nodes. */
