@@ -8,9 +8,8 @@ import java.util.Arrays;
  * tetrahedron is drawn as its four linear sub-triangles (through the mid-edge nodes), so quadratic
  * fields show their mid-edge values. Triangles point outward (right-hand normal).
  *
- * <p>Faces are matched by an open-addressing table that stores only the face's id (tetrahedron × 4
- * + local face) and compares corner sets by reading them back: 4 bytes a slot on meshes of millions
- * of tetrahedra.
+ * <p>Faces are matched in buckets of their smallest corner (see {@link #unsharedFaces}); the face
+ * groups' faces, far fewer, by an open-addressing table.
  */
 public final class BoundarySurface {
   /** Outward local faces of a positively oriented tetrahedron (corner 3 above face 0-1-2). */
@@ -38,54 +37,19 @@ public final class BoundarySurface {
    */
   public static BoundarySurface of(PartGeometry g, boolean[] shown) {
     int per = g.nodesPerTet;
-    int tets = g.tetCount();
-    int[] table = new int[tableSize(4L * tets)];
-    Arrays.fill(table, -1);
-    int mask = table.length - 1;
-    int[] a = new int[3];
-    int[] b = new int[3];
-    for (int t = 0; t < tets; t++) {
-      int part = g.tetPart[t];
-      if (part < shown.length && !shown[part]) {
-        continue;
-      }
-      for (int f = 0; f < 4; f++) {
-        corners(g.tets, per, t, f, a);
-        int slot = hash(a) & mask;
-        while (true) {
-          int id = table[slot];
-          if (id == -1) {
-            table[slot] = 4 * t + f;
-            break;
-          }
-          int live = id >= 0 ? id : -id - 2;
-          corners(g.tets, per, live / 4, live % 4, b);
-          if (id >= 0 && a[0] == b[0] && a[1] == b[1] && a[2] == b[2]) {
-            table[slot] = -id - 2; // shared by two shown tetrahedra: inside
-            break;
-          }
-          slot = (slot + 1) & mask;
-        }
-      }
-    }
+    int[] boundary = unsharedFaces(g, shown, per);
     int[] groupTable = faceGroupTable(g);
     int sub = per == 4 ? 1 : 4;
-    int count = 0;
-    for (int id : table) {
-      if (id >= 0) {
-        count++;
-      }
-    }
+    int count = boundary.length;
+    int[] a = new int[3];
+    int[] b = new int[3];
     int[] nodes = new int[3 * sub * count];
     int[] group = new int[sub * count];
     int[] partOf = new int[sub * count];
     int[] tetOf = new int[sub * count];
     int n = 0;
     int gmask = groupTable.length - 1;
-    for (int id : table) {
-      if (id < 0) {
-        continue;
-      }
+    for (int id : boundary) {
       int t = id / 4;
       int[] lf = FACES[id % 4];
       corners(g.tets, per, t, id % 4, a);
@@ -119,6 +83,72 @@ public final class BoundarySurface {
       }
     }
     return new BoundarySurface(nodes, group, partOf, tetOf);
+  }
+
+  /**
+   * The faces (tetrahedron × 4 + local face) of shown tetrahedra that no other shown tetrahedron
+   * shares. Faces are bucketed by their smallest corner (a counting sort) and matched within their
+   * bucket by the other two corners: every pass runs through memory in order, where a hash table of
+   * millions of faces paid a cache miss per probe and another to read the stored face back. A face
+   * met a third time (a non-manifold mesh) stays on the surface.
+   */
+  private static int[] unsharedFaces(PartGeometry g, boolean[] shown, int per) {
+    int tets = g.tetCount();
+    int[] start = new int[g.nodeCount() + 1];
+    int[] c = new int[3];
+    for (int t = 0; t < tets; t++) {
+      if (isShown(g, shown, t)) {
+        for (int f = 0; f < 4; f++) {
+          corners(g.tets, per, t, f, c);
+          start[c[0] + 1]++;
+        }
+      }
+    }
+    for (int v = 0; v < g.nodeCount(); v++) {
+      start[v + 1] += start[v];
+    }
+    int total = start[g.nodeCount()];
+    int[] ids = new int[total];
+    int[] second = new int[total];
+    int[] third = new int[total];
+    int[] next = Arrays.copyOf(start, start.length - 1);
+    for (int t = 0; t < tets; t++) {
+      if (isShown(g, shown, t)) {
+        for (int f = 0; f < 4; f++) {
+          corners(g.tets, per, t, f, c);
+          int p = next[c[0]]++;
+          ids[p] = 4 * t + f;
+          second[p] = c[1];
+          third[p] = c[2];
+        }
+      }
+    }
+    boolean[] shared = new boolean[total];
+    int unshared = total;
+    for (int v = 0; v < g.nodeCount(); v++) {
+      for (int i = start[v]; i < start[v + 1]; i++) {
+        for (int j = i + 1; j < start[v + 1] && !shared[i]; j++) {
+          if (!shared[j] && second[j] == second[i] && third[j] == third[i]) {
+            shared[i] = true;
+            shared[j] = true;
+            unshared -= 2;
+          }
+        }
+      }
+    }
+    int[] out = new int[unshared];
+    int k = 0;
+    for (int i = 0; i < total; i++) {
+      if (!shared[i]) {
+        out[k++] = ids[i];
+      }
+    }
+    return out;
+  }
+
+  private static boolean isShown(PartGeometry g, boolean[] shown, int t) {
+    int part = g.tetPart[t];
+    return part >= shown.length || shown[part];
   }
 
   private static int put(
