@@ -9,7 +9,6 @@ import dev.soakfield.mesh.TetMesh;
  */
 public final class GroupMonitor {
   private final SystemAssembler assembler;
-  private final double[] solubilityPerTet;
   private final double[] groupSolubility;
   private final double[] concentrationScale;
   private final int[][] groupNodes;
@@ -57,7 +56,6 @@ public final class GroupMonitor {
       boolean[] prescribed) {
     this.assembler = assembler;
     this.concentrationScale = concentrationScale.clone();
-    this.solubilityPerTet = solubilityPerTet.clone();
     TetMesh mesh = assembler.space().mesh();
     int groups = mesh.volumeGroups().size();
     groupSolubility = new double[groups];
@@ -104,7 +102,6 @@ public final class GroupMonitor {
    * from now on use it; first-arrival times already found stay.
    */
   public void updateSolubility(double[] perTet) {
-    System.arraycopy(perTet, 0, solubilityPerTet, 0, solubilityPerTet.length);
     TetMesh mesh = assembler.space().mesh();
     for (int t = 0; t < mesh.tetCount(); t++) {
       groupSolubility[mesh.tetGroup(t)] = perTet[t];

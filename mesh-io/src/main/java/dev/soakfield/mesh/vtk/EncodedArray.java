@@ -1,6 +1,5 @@
 package dev.soakfield.mesh.vtk;
 
-import java.io.FilterOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.ByteBuffer;
@@ -51,36 +50,19 @@ final class EncodedArray {
       out.write(ready);
       return;
     }
-    try (OutputStream b64 = Base64.getEncoder().wrap(new KeepOpen(out))) {
+    try (OutputStream b64 = Base64.getEncoder().wrap(new KeepOpenStream(out))) {
       b64.write(
           ByteBuffer.allocate(HEADER_BYTES)
               .order(ByteOrder.LITTLE_ENDIAN)
               .putLong(array.byteCount())
               .array());
     }
-    try (OutputStream b64 = Base64.getEncoder().wrap(new KeepOpen(out))) {
+    try (OutputStream b64 = Base64.getEncoder().wrap(new KeepOpenStream(out))) {
       array.writeBytes(b64);
     }
   }
 
   static long base64Length(long bytes) {
     return 4 * ((bytes + 2) / 3);
-  }
-
-  /** Lets a base64 wrapper close (to write its padding) without closing the file. */
-  private static final class KeepOpen extends FilterOutputStream {
-    KeepOpen(OutputStream out) {
-      super(out);
-    }
-
-    @Override
-    public void write(byte[] b, int off, int len) throws IOException {
-      out.write(b, off, len);
-    }
-
-    @Override
-    public void close() throws IOException {
-      flush();
-    }
   }
 }

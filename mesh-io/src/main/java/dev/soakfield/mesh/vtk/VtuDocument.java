@@ -1,7 +1,6 @@
 package dev.soakfield.mesh.vtk;
 
 import java.io.BufferedOutputStream;
-import java.io.FilterOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.ByteBuffer;
@@ -142,10 +141,10 @@ final class VtuDocument {
 
   /** Byte count header and data as two base64 runs. */
   private static void base64Blob(OutputStream out, VtkArray array) throws IOException {
-    try (OutputStream b64 = Base64.getEncoder().wrap(new KeepOpen(out))) {
+    try (OutputStream b64 = Base64.getEncoder().wrap(new KeepOpenStream(out))) {
       b64.write(header(array.byteCount()));
     }
-    try (OutputStream b64 = Base64.getEncoder().wrap(new KeepOpen(out))) {
+    try (OutputStream b64 = Base64.getEncoder().wrap(new KeepOpenStream(out))) {
       array.writeBytes(b64);
     }
   }
@@ -159,22 +158,5 @@ final class VtuDocument {
 
   private static void text(OutputStream out, String s) throws IOException {
     out.write(s.getBytes(StandardCharsets.UTF_8));
-  }
-
-  /** Lets a base64 wrapper close (to write its padding) without closing the file. */
-  private static final class KeepOpen extends FilterOutputStream {
-    KeepOpen(OutputStream out) {
-      super(out);
-    }
-
-    @Override
-    public void write(byte[] b, int off, int len) throws IOException {
-      out.write(b, off, len);
-    }
-
-    @Override
-    public void close() throws IOException {
-      flush();
-    }
   }
 }

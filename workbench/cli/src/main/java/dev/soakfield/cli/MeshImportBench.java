@@ -13,11 +13,8 @@ import java.io.InputStream;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Arrays;
-import java.util.Comparator;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import java.util.stream.Stream;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -92,7 +89,7 @@ final class MeshImportBench implements Callable<Integer> {
       return ExitCodes.OK;
     } finally {
       if (temporary) {
-        deleteTree(work);
+        BenchSupport.deleteTree(work);
       }
     }
   }
@@ -127,10 +124,10 @@ final class MeshImportBench implements Callable<Integer> {
       read[i] = (t2 - t1) / 1e6;
       full[i] = (t3 - t2) / 1e6;
     }
-    double s = median(scan);
-    double l = median(lineScan);
-    double r = median(read);
-    double f = median(full);
+    double s = BenchSupport.median(scan);
+    double l = BenchSupport.median(lineScan);
+    double r = BenchSupport.median(read);
+    double f = BenchSupport.median(full);
     out.printf(
         Locale.ROOT,
         "%-7s %8.1f %9.1f %9.1f %8.1f %10.1f %10.2f %10.2f %12.2f%n",
@@ -172,19 +169,5 @@ final class MeshImportBench implements Callable<Integer> {
       }
     }
     return n;
-  }
-
-  private static double median(double[] v) {
-    double[] c = v.clone();
-    Arrays.sort(c);
-    return c.length % 2 == 1 ? c[c.length / 2] : 0.5 * (c[c.length / 2 - 1] + c[c.length / 2]);
-  }
-
-  private static void deleteTree(Path root) throws IOException {
-    try (Stream<Path> s = Files.walk(root)) {
-      for (Path p : s.sorted(Comparator.reverseOrder()).toList()) {
-        Files.deleteIfExists(p);
-      }
-    }
   }
 }

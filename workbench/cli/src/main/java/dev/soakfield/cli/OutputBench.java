@@ -15,7 +15,6 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -119,7 +118,7 @@ final class OutputBench implements Callable<Integer> {
       return ExitCodes.OK;
     } finally {
       if (temporary) {
-        deleteTree(work);
+        BenchSupport.deleteTree(work);
       }
     }
   }
@@ -194,8 +193,8 @@ final class OutputBench implements Callable<Integer> {
       t[i] = (t1 - t0) / 1e6;
       p[i] = (t2 - t1) / 1e6;
     }
-    double ms = median(t);
-    double pm = median(p);
+    double ms = BenchSupport.median(t);
+    double pm = BenchSupport.median(p);
     out.printf(
         Locale.ROOT,
         "%-20s %9.1f %9.1f %9.1f %9.1f %11.2f %11s%n",
@@ -244,7 +243,7 @@ final class OutputBench implements Callable<Integer> {
 
   private static void fresh(Path folder) throws IOException {
     if (Files.exists(folder)) {
-      deleteTree(folder);
+      BenchSupport.deleteTree(folder);
     }
     Files.createDirectories(folder);
   }
@@ -257,19 +256,5 @@ final class OutputBench implements Callable<Integer> {
       }
     }
     return sum;
-  }
-
-  private static double median(double[] v) {
-    double[] c = v.clone();
-    Arrays.sort(c);
-    return c.length % 2 == 1 ? c[c.length / 2] : 0.5 * (c[c.length / 2 - 1] + c[c.length / 2]);
-  }
-
-  private static void deleteTree(Path root) throws IOException {
-    try (Stream<Path> s = Files.walk(root)) {
-      for (Path p : s.sorted(Comparator.reverseOrder()).toList()) {
-        Files.deleteIfExists(p);
-      }
-    }
   }
 }

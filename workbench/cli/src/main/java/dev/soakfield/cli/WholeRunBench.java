@@ -17,10 +17,8 @@ import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Comparator;
 import java.util.Locale;
 import java.util.concurrent.atomic.AtomicReference;
-import java.util.stream.Stream;
 
 /**
  * A whole {@code soakfield run} of a flux-fed box, timed by phase: a 10 mm box of n³ cells (six
@@ -110,7 +108,7 @@ final class WholeRunBench {
           peakHeap() / (double) mesh.tetCount());
       out.flush();
     } finally {
-      deleteTree(dir);
+      BenchSupport.deleteTree(dir);
     }
   }
 
@@ -168,13 +166,5 @@ final class WholeRunBench {
       }
     }
     return peak;
-  }
-
-  private static void deleteTree(Path dir) throws IOException {
-    try (Stream<Path> s = Files.walk(dir)) {
-      for (Path p : s.sorted(Comparator.reverseOrder()).toList()) {
-        Files.deleteIfExists(p);
-      }
-    }
   }
 }
