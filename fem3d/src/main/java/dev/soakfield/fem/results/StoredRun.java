@@ -23,20 +23,20 @@ import java.util.Optional;
  * summary.json. {@link ResultFolder} is the same folder while a run writes it.
  */
 public final class StoredRun {
-  private static final int FRAMES_KEPT = 4;
+  private static final int FIELDS_KEPT = 8;
 
   private final Path folder;
   private final TetMesh mesh;
   private final List<PvdEntry> frames;
   private final Optional<Series> series;
   private final Optional<JsonNode> summary;
-  private final Map<Integer, VtuGrid> cache =
-      new LinkedHashMap<>(8, 0.75f, true) {
+  private final Map<String, double[]> cache =
+      new LinkedHashMap<>(16, 0.75f, true) {
         private static final long serialVersionUID = 1L;
 
         @Override
-        protected boolean removeEldestEntry(Map.Entry<Integer, VtuGrid> e) {
-          return size() > FRAMES_KEPT;
+        protected boolean removeEldestEntry(Map.Entry<String, double[]> e) {
+          return size() > FIELDS_KEPT;
         }
       };
 
@@ -66,11 +66,26 @@ public final class StoredRun {
    * @throws ResultFolderException when series.csv holds a bad cell (file, line and column)
    */
   public static StoredRun open(Path folder) {
-    Path pvd = folder.resolve(ResultFiles.FIELDS);
-    List<PvdEntry> frames = PvdReader.read(pvd);
     Optional<JsonNode> summary = readSummary(folder.resolve(ResultFiles.SUMMARY));
     Path meshFile = meshFile(folder, summary);
-    TetMesh mesh = MeshAsRun.read(meshFile, summary);
+    return open(folder, summary, MeshAsRun.read(meshFile, summary), "the mesh " + meshFile);
+  }
+
+  /**
+   * Opens a result folder whose run's mesh is already in memory: the run itself, making its report,
+   * need not read back and check the mesh it has just worked on.
+   *
+   * @throws MeshInputException as {@link #open(Path)}, and when the frames do not fit {@code mesh}
+   */
+  public static StoredRun open(Path folder, TetMesh mesh) {
+    return open(
+        folder, readSummary(folder.resolve(ResultFiles.SUMMARY)), mesh, "the run's mesh in memory");
+  }
+
+  private static StoredRun open(
+      Path folder, Optional<JsonNode> summary, TetMesh mesh, String meshName) {
+    Path pvd = folder.resolve(ResultFiles.FIELDS);
+    List<PvdEntry> frames = PvdReader.read(pvd);
     StoredRun r =
         new StoredRun(
             folder,
@@ -80,18 +95,18 @@ public final class StoredRun {
                 ? Optional.of(Series.read(folder.resolve(ResultFiles.SERIES)))
                 : Optional.empty(),
             summary);
-    VtuGrid first = r.frame(0);
-    if (first.pointCount() != mesh.nodeCount() || first.cellCount() != mesh.tetCount()) {
+    VtuReader.Outline first = VtuReader.outline(r.framePath(0));
+    if (first.points() != mesh.nodeCount() || first.cells() != mesh.tetCount()) {
       throw new MeshInputException(
           r.framePath(0).toString(),
           "",
-          first.pointCount() + " points and " + first.cellCount() + " cells",
+          first.points() + " points and " + first.cells() + " cells",
           "the "
               + mesh.nodeCount()
               + " nodes and "
               + mesh.tetCount()
-              + " tetrahedra of the mesh "
-              + meshFile);
+              + " tetrahedra of "
+              + meshName);
     }
     return r;
   }
@@ -184,25 +199,19 @@ public final class StoredRun {
     return folder.resolve(frames.get(frame).relativeFile());
   }
 
-  /** The grid of one frame, read on first use. */
-  public synchronized VtuGrid frame(int frame) {
-    return cache.computeIfAbsent(frame, f -> VtuReader.read(framePath(f)));
+  /** The whole grid of one frame (its mesh and every field), read from its file. */
+  public VtuGrid frame(int frame) {
+    return VtuReader.read(framePath(frame));
   }
 
   /**
-   * The nodal field of one frame, by its name in the frame files ("c", "phi", ...).
+   * The nodal field of one frame, by its name in the frame files ("c", "phi", ...); only that array
+   * is read from the file, and the last few read are kept.
    *
    * @throws MeshInputException when the frame's file lacks it
    */
-  public double[] field(int frame, String fieldName) {
-    VtuGrid g = frame(frame);
-    if (!g.pointFieldNames().contains(fieldName)) {
-      throw new MeshInputException(
-          framePath(frame).toString(),
-          "PointData",
-          "the fields " + g.pointFieldNames(),
-          "a point field '" + fieldName + "'");
-    }
-    return g.pointField(fieldName);
+  public synchronized double[] field(int frame, String fieldName) {
+    return cache.computeIfAbsent(
+        frame + "/" + fieldName, k -> VtuReader.pointField(framePath(frame), fieldName));
   }
 }

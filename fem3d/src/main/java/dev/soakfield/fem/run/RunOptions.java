@@ -1,7 +1,6 @@
 package dev.soakfield.fem.run;
 
 import dev.soakfield.fem.model.LawResolver;
-import dev.soakfield.fem.results.ResultFolder;
 import dev.soakfield.mesh.vtk.VtuEncoding;
 import java.util.Objects;
 
@@ -28,7 +27,7 @@ public record RunOptions(
     int checkpointSteps,
     double checkpointSeconds,
     boolean resume,
-    ResultFolder.Completion completion,
+    RunCompletion completion,
     VtuEncoding frameEncoding) {
   /** Checkpoints by default: every 500 steps or 60 s of wall time, whichever comes first. */
   public static final int DEFAULT_CHECKPOINT_STEPS = 500;
@@ -90,7 +89,7 @@ public record RunOptions(
         DEFAULT_CHECKPOINT_STEPS,
         DEFAULT_CHECKPOINT_SECONDS,
         false,
-        ResultFolder.Completion.NONE,
+        RunCompletion.NONE,
         VtuEncoding.DEFAULT);
   }
 
@@ -123,7 +122,7 @@ public record RunOptions(
   }
 
   /** These options with {@code completion} run before the folder says finished. */
-  public RunOptions withCompletion(ResultFolder.Completion completion) {
+  public RunOptions withCompletion(RunCompletion completion) {
     return new RunOptions(
         force,
         toolVersion,

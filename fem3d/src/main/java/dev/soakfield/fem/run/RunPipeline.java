@@ -171,7 +171,10 @@ public final class RunPipeline {
     RunManifest starting = RunManifest.starting(caseFile, spec.mesh(), options.toolVersion());
     if (options.resume()
         && ResultFolder.completeUnreported(
-            outDir, starting, options.completion(), java.util.Set.of(Checkpointer.NAME))) {
+            outDir,
+            starting,
+            (f, finished) -> options.completion().complete(f, finished, mesh),
+            java.util.Set.of(Checkpointer.NAME))) {
       // stopped between its results and its report: only the report was missing
       Files.deleteIfExists(outDir.resolve(Checkpointer.NAME));
       return RunSummary.fromFolder(outDir.toAbsolutePath().normalize());
@@ -298,7 +301,7 @@ public final class RunPipeline {
       log.line(times.line());
       log.close();
       long reportStart = System.nanoTime();
-      folder.finish(options.completion());
+      folder.finish((f, finished) -> options.completion().complete(f, finished, mesh));
       progress.timed(times.withReport((System.nanoTime() - reportStart) * 1e-9));
       Files.deleteIfExists(checkpoint); // the results are complete: nothing left to resume
       return new RunSummary(

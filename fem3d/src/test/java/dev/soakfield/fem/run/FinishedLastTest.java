@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.soakfield.fem.results.MeshAsRun;
 import dev.soakfield.fem.results.RunManifest;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -35,7 +36,9 @@ class FinishedLastTest {
     RunOptions options =
         RunOptions.defaults()
             .withCompletion(
-                (folder, finished) -> {
+                (folder, finished, mesh) -> {
+                  // the run's own mesh comes along, the one its folder holds
+                  assertEquals(MeshAsRun.inFolder(folder).tetCount(), mesh.tetCount());
                   // the results are in place, the folder does not yet claim to be finished
                   assertEquals(
                       RunManifest.Status.RUNNING,
@@ -58,7 +61,7 @@ class FinishedLastTest {
     RunOptions options =
         RunOptions.defaults()
             .withCompletion(
-                (folder, finished) -> {
+                (folder, finished, mesh) -> {
                   throw new Killed();
                 });
     assertThrows(Killed.class, () -> RunPipeline.run(c, out, RunProgress.SILENT, options));

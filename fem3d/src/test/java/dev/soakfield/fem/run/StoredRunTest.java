@@ -78,6 +78,22 @@ class StoredRunTest {
   }
 
   @Test
+  void theRunsMeshInMemoryIsTakenOnlyWhenTheFramesFitIt() throws IOException {
+    Path out = run();
+    StoredRun fromDisk = StoredRun.open(out);
+    StoredRun given = StoredRun.open(out, fromDisk.mesh());
+    assertEquals(fromDisk.frameCount(), given.frameCount());
+    org.junit.jupiter.api.Assertions.assertArrayEquals(fromDisk.field(2, "c"), given.field(2, "c"));
+    // a mesh of another size is refused, naming the frame file and both sizes
+    MeshInputException e =
+        assertThrows(
+            MeshInputException.class,
+            () -> StoredRun.open(out, StructuredMesher.box(1e-3, 1e-4, 1e-4, 4, 1, 1, 1)));
+    assertTrue(e.getMessage().contains("c_0000.vtu"), e.getMessage());
+    assertTrue(e.getMessage().contains("tetrahedra of the run's mesh in memory"), e.getMessage());
+  }
+
+  @Test
   void aBadCellInTheSeriesIsALocatedErrorWhenTheFolderIsOpened() throws IOException {
     Path out = run();
     Path series = out.resolve(ResultFiles.SERIES);

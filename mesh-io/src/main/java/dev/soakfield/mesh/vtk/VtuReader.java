@@ -44,6 +44,25 @@ public final class VtuReader {
     final StringBuilder text = new StringBuilder();
   }
 
+  /** What the XML part of a file declares: sizes, encoding and its DataArrays. */
+  private static final class Header {
+    String headerType = "UInt32";
+    String compressor = "";
+    int points = -1;
+    int cells = -1;
+    final List<Declared> arrays = new ArrayList<>();
+    boolean appended;
+  }
+
+  /**
+   * Sizes and point fields of a .vtu file, read from its XML part alone (its data is not decoded).
+   *
+   * @param points the Piece's NumberOfPoints
+   * @param cells the Piece's NumberOfCells
+   * @param pointFields the names of its PointData arrays, in file order
+   */
+  public record Outline(int points, int cells, List<String> pointFields) {}
+
   /**
    * Reads the file.
    *
@@ -51,6 +70,77 @@ public final class VtuReader {
    *     not fit its declared sizes; the message names the file, the array and the line
    */
   public static VtuGrid read(Path file) {
+    try (Opened o = open(file)) {
+      return assemble(o);
+    }
+  }
+
+  /**
+   * The sizes and point field names of a file, without decoding its data.
+   *
+   * @throws MeshInputException as {@link #read}
+   */
+  public static Outline outline(Path file) {
+    try (Opened o = open(file)) {
+      List<String> names = new ArrayList<>();
+      for (Declared d : o.header.arrays) {
+        if (d.section.equals("PointData")) {
+          names.add(d.name);
+        }
+      }
+      return new Outline(o.header.points, o.header.cells, List.copyOf(names));
+    }
+  }
+
+  /**
+   * One point field of a file. Only that array is decoded: a result frame holds its mesh too, which
+   * is many times larger than one field.
+   *
+   * @throws MeshInputException as {@link #read}, and when the file has no such point field
+   */
+  public static double[] pointField(Path file, String name) {
+    try (Opened o = open(file)) {
+      for (Declared d : o.header.arrays) {
+        if (d.section.equals("PointData") && d.name.equals(name)) {
+          return doubles(o.source, d, bytes(o, d), (long) d.components * o.header.points);
+        }
+      }
+      throw new MeshInputException(
+          o.source, "PointData", "the fields " + outlineNames(o), "a point field '" + name + "'");
+    }
+  }
+
+  private static List<String> outlineNames(Opened o) {
+    return o.header.arrays.stream()
+        .filter(d -> d.section.equals("PointData"))
+        .map(d -> d.name)
+        .toList();
+  }
+
+  /** A file whose XML part is read; its appended data, if any, is read from the file on demand. */
+  private static final class Opened implements AutoCloseable {
+    final String source;
+    final Header header;
+    final ChannelText appended;
+    final Blobs blobs;
+
+    Opened(String source, Header header, ChannelText appended) {
+      this.source = source;
+      this.header = header;
+      this.appended = appended;
+      int headerBytes = header.headerType.equals("UInt64") ? 8 : 4;
+      this.blobs = new Blobs(source, headerBytes, !header.compressor.isEmpty());
+    }
+
+    @Override
+    public void close() {
+      if (appended != null) {
+        appended.close();
+      }
+    }
+  }
+
+  private static Opened open(Path file) {
     String source = file.toString();
     if (!Files.isRegularFile(file)) {
       throw new MeshInputException(source, "", "no such file", "a .vtu file");
@@ -58,10 +148,11 @@ public final class VtuReader {
     XMLInputFactory factory = XMLInputFactory.newFactory();
     factory.setProperty(XMLInputFactory.SUPPORT_DTD, false);
     factory.setProperty(XMLInputFactory.IS_SUPPORTING_EXTERNAL_ENTITIES, false);
+    Header header;
     try (InputStream in = Files.newInputStream(file)) {
       XMLStreamReader x = factory.createXMLStreamReader(in);
       try {
-        return parse(source, x);
+        header = parse(source, x);
       } finally {
         x.close();
       }
@@ -70,59 +161,37 @@ public final class VtuReader {
       throw new MeshInputException(
           source, line > 0 ? "line " + line : "", "malformed XML (" + e.getMessage() + ")", "XML");
     } catch (IOException e) {
-      throw new MeshInputException(
-          source, "", "an unreadable file (" + e.getMessage() + ")", "a readable .vtu file");
+      throw unreadable(source, e);
     }
+    // the appended base64 (most of a large file) is read from the file where an array needs it,
+    // not parsed as XML text: StAX would hand all of it over as characters
+    return new Opened(source, header, header.appended ? ChannelText.appended(file) : null);
   }
 
-  private static VtuGrid parse(String source, XMLStreamReader x) throws XMLStreamException {
-    String headerType = "UInt32";
-    String compressor = "";
+  static MeshInputException unreadable(String source, IOException e) {
+    return new MeshInputException(
+        source, "", "an unreadable file (" + e.getMessage() + ")", "a readable .vtu file");
+  }
+
+  private static Header parse(String source, XMLStreamReader x) throws XMLStreamException {
+    Header h = new Header();
     String section = "";
-    int points = -1;
-    int cells = -1;
     int pieces = 0;
-    List<Declared> arrays = new ArrayList<>();
     Declared open = null;
-    StringBuilder appended = null;
     while (x.hasNext()) {
       int ev = x.next();
       if (ev == XMLStreamConstants.START_ELEMENT) {
         String el = x.getLocalName();
         int line = x.getLocation().getLineNumber();
         switch (el) {
-          case "VTKFile" -> {
-            String type = attr(x, "type", "");
-            if (!type.equals("UnstructuredGrid")) {
-              throw new MeshInputException(
-                  source, "line " + line, "VTKFile type '" + type + "'", "type 'UnstructuredGrid'");
-            }
-            String order = attr(x, "byte_order", "LittleEndian");
-            if (!order.equals("LittleEndian")) {
-              throw new MeshInputException(
-                  source, "line " + line, "byte_order '" + order + "'", "LittleEndian");
-            }
-            compressor = attr(x, "compressor", "");
-            if (!compressor.isEmpty() && !compressor.equals(ZLIB)) {
-              throw new MeshInputException(
-                  source,
-                  "line " + line,
-                  "compressed data (" + compressor + ")",
-                  "uncompressed data or " + ZLIB);
-            }
-            headerType = attr(x, "header_type", "UInt32");
-            if (!headerType.equals("UInt32") && !headerType.equals("UInt64")) {
-              throw new MeshInputException(
-                  source, "line " + line, "header_type '" + headerType + "'", "UInt32 or UInt64");
-            }
-          }
+          case "VTKFile" -> fileAttributes(source, line, x, h);
           case "Piece" -> {
             pieces++;
             if (pieces > 1) {
               throw new MeshInputException(source, "line " + line, "a second Piece", "one Piece");
             }
-            points = count(source, line, x, "NumberOfPoints");
-            cells = count(source, line, x, "NumberOfCells");
+            h.points = count(source, line, x, "NumberOfPoints");
+            h.cells = count(source, line, x, "NumberOfCells");
           }
           case "PointData", "CellData", "Points", "Cells" -> section = el;
           case "DataArray" -> {
@@ -142,7 +211,7 @@ public final class VtuReader {
                   "format '" + d.format + "'",
                   "format 'ascii', 'binary' or 'appended'");
             }
-            arrays.add(d);
+            h.arrays.add(d);
             open = d;
           }
           case "AppendedData" -> {
@@ -154,7 +223,8 @@ public final class VtuReader {
                   "appended data in encoding '" + enc + "'",
                   "appended base64 (raw appended data is not XML; write the file as base64)");
             }
-            appended = new StringBuilder();
+            h.appended = true;
+            return requirePiece(source, h, pieces); // the rest of the file is the data
           }
           default -> {
             // other elements (FieldData, Cells' faces...) are not used here
@@ -163,16 +233,11 @@ public final class VtuReader {
       } else if (ev == XMLStreamConstants.CHARACTERS || ev == XMLStreamConstants.CDATA) {
         if (open != null) {
           open.text.append(x.getTextCharacters(), x.getTextStart(), x.getTextLength());
-        } else if (appended != null) {
-          appended.append(x.getTextCharacters(), x.getTextStart(), x.getTextLength());
         }
       } else if (ev == XMLStreamConstants.END_ELEMENT) {
         String el = x.getLocalName();
         if (el.equals("DataArray")) {
           open = null;
-        } else if (el.equals("AppendedData")) {
-          appended = new StringBuilder(stripToMarker(source, appended));
-          break;
         } else if (el.equals("PointData")
             || el.equals("CellData")
             || el.equals("Points")
@@ -181,30 +246,61 @@ public final class VtuReader {
         }
       }
     }
+    return requirePiece(source, h, pieces);
+  }
+
+  private static void fileAttributes(String source, int line, XMLStreamReader x, Header h) {
+    String type = attr(x, "type", "");
+    if (!type.equals("UnstructuredGrid")) {
+      throw new MeshInputException(
+          source, "line " + line, "VTKFile type '" + type + "'", "type 'UnstructuredGrid'");
+    }
+    String order = attr(x, "byte_order", "LittleEndian");
+    if (!order.equals("LittleEndian")) {
+      throw new MeshInputException(
+          source, "line " + line, "byte_order '" + order + "'", "LittleEndian");
+    }
+    h.compressor = attr(x, "compressor", "");
+    if (!h.compressor.isEmpty() && !h.compressor.equals(ZLIB)) {
+      throw new MeshInputException(
+          source,
+          "line " + line,
+          "compressed data (" + h.compressor + ")",
+          "uncompressed data or " + ZLIB);
+    }
+    h.headerType = attr(x, "header_type", "UInt32");
+    if (!h.headerType.equals("UInt32") && !h.headerType.equals("UInt64")) {
+      throw new MeshInputException(
+          source, "line " + line, "header_type '" + h.headerType + "'", "UInt32 or UInt64");
+    }
+  }
+
+  private static Header requirePiece(String source, Header h, int pieces) {
     if (pieces == 0) {
       throw new MeshInputException(source, "", "no Piece element", "one UnstructuredGrid Piece");
     }
-    int headerBytes = headerType.equals("UInt64") ? 8 : 4;
-    Blobs blobs = new Blobs(source, headerBytes, !compressor.isEmpty());
-    return assemble(source, points, cells, arrays, appended, blobs);
+    return h;
   }
 
-  private static String stripToMarker(String source, StringBuilder appended) {
-    int mark = appended.indexOf("_");
-    if (mark < 0) {
-      throw new MeshInputException(
-          source, "AppendedData", "no '_' marker", "'_' before the appended data");
+  /** The decoded bytes of a binary or appended array; null for an ascii one (parsed from text). */
+  private static ByteBuffer bytes(Opened o, Declared d) {
+    if (d.format.equals("binary")) {
+      return o.blobs.decode(d, d.text, 0);
     }
-    return appended.substring(mark + 1);
+    if (d.format.equals("appended")) {
+      if (o.appended == null) {
+        throw new MeshInputException(
+            o.source, where(d), "an appended array but no AppendedData", "an AppendedData element");
+      }
+      return o.blobs.decode(d, o.appended, d.offset);
+    }
+    return null;
   }
 
-  private static VtuGrid assemble(
-      String source,
-      int points,
-      int cells,
-      List<Declared> arrays,
-      StringBuilder appended,
-      Blobs blobs) {
+  private static VtuGrid assemble(Opened o) {
+    String source = o.source;
+    int points = o.header.points;
+    int cells = o.header.cells;
     double[] xyz = null;
     int[] conn = null;
     int[] offsets = null;
@@ -212,17 +308,8 @@ public final class VtuReader {
     Map<String, double[]> pointFields = new LinkedHashMap<>();
     Map<String, double[]> cellFields = new LinkedHashMap<>();
     Map<String, Integer> comps = new HashMap<>();
-    for (Declared d : arrays) {
-      ByteBuffer bytes = null;
-      if (d.format.equals("binary")) {
-        bytes = blobs.decode(d, d.text, 0);
-      } else if (d.format.equals("appended")) {
-        if (appended == null) {
-          throw new MeshInputException(
-              source, where(d), "an appended array but no AppendedData", "an AppendedData element");
-        }
-        bytes = blobs.decode(d, appended, d.offset);
-      }
+    for (Declared d : o.header.arrays) {
+      ByteBuffer bytes = bytes(o, d);
       switch (d.section) {
         case "Points" -> xyz = doubles(source, d, bytes, 3L * points);
         case "Cells" -> {

@@ -61,6 +61,13 @@ class VtuReaderTest {
       assertArrayEquals(v, g.pointField("flux"));
       assertEquals(3, g.components("flux"));
       assertArrayEquals(rate, g.cellField("rate"));
+      // one field alone, and the sizes alone, read back the same without decoding the rest
+      assertArrayEquals(c, VtuReader.pointField(file, "c"));
+      assertArrayEquals(v, VtuReader.pointField(file, "flux"));
+      VtuReader.Outline outline = VtuReader.outline(file);
+      assertEquals(mesh.nodeCount(), outline.points());
+      assertEquals(mesh.tetCount(), outline.cells());
+      assertEquals(List.of("c", "flux"), outline.pointFields());
       double[] groups = g.cellField(VtuWriter.VOLUME_GROUP);
       for (int t = 0; t < mesh.tetCount(); t++) {
         assertEquals(mesh.tetGroup(t), groups[t], 0);
@@ -106,5 +113,51 @@ class VtuReaderTest {
     PvdWriter.write(empty, List.of());
     MeshInputException ex = assertThrows(MeshInputException.class, () -> PvdReader.read(empty));
     assertTrue(ex.getMessage().contains("no DataSet entry"), ex.getMessage());
+  }
+
+  @Test
+  void namesTheFieldsThereAreWhenOneIsMissing() throws Exception {
+    Path file = appendedBox("fields.vtu");
+    MeshInputException e =
+        assertThrows(MeshInputException.class, () -> VtuReader.pointField(file, "phi"));
+    assertTrue(e.getMessage().startsWith(file.toString()), e.getMessage());
+    assertTrue(e.getMessage().contains("[c]"), e.getMessage());
+    assertTrue(e.getMessage().contains("'phi'"), e.getMessage());
+  }
+
+  @Test
+  void appendedDataWithoutItsMarkerIsRefused() throws Exception {
+    Path file = appendedBox("nomark.vtu");
+    String text = Files.readString(file, StandardCharsets.ISO_8859_1);
+    Files.writeString(
+        file, text.replaceFirst("(<AppendedData[^>]*>\\s*)_", "$1"), StandardCharsets.ISO_8859_1);
+    MeshInputException e =
+        assertThrows(MeshInputException.class, () -> VtuReader.pointField(file, "c"));
+    assertTrue(e.getMessage().contains("'_' marker"), e.getMessage());
+  }
+
+  @Test
+  void aFrameCutShortSaysItsDataEndsEarly() throws Exception {
+    Path file = appendedBox("short.vtu");
+    byte[] all = Files.readAllBytes(file);
+    // keep the XML part and the first field, drop the mesh arrays that follow it
+    String text = new String(all, StandardCharsets.ISO_8859_1);
+    int data = text.indexOf('_', text.indexOf("<AppendedData")) + 1;
+    Files.write(file, java.util.Arrays.copyOf(all, data + 200));
+    assertEquals(1.5, VtuReader.pointField(file, "c")[0], 0);
+    MeshInputException e = assertThrows(MeshInputException.class, () -> VtuReader.read(file));
+    assertTrue(e.getMessage().startsWith(file.toString()), e.getMessage());
+    assertTrue(e.getMessage().contains("DataArray 'Points'"), e.getMessage());
+    assertTrue(e.getMessage().contains("characters left"), e.getMessage());
+  }
+
+  private Path appendedBox(String name) throws java.io.IOException {
+    TetMesh mesh = StructuredMesher.box(1, 1, 1, 1, 1, 1, 1);
+    double[] c = new double[mesh.nodeCount()];
+    java.util.Arrays.fill(c, 1.5);
+    Path file = dir.resolve(name);
+    VtuWriter.write(
+        file, mesh, List.of(new Field("c", 1, c)), List.of(), VtuFormat.APPENDED_BASE64);
+    return file;
   }
 }

@@ -41,8 +41,8 @@ public final class CaseRun {
     // pictures and report are made before the folder says finished (see ResultFolder.finish)
     RunOptions reported =
         options.withCompletion(
-            (folder, finished) -> {
-              noPictures.set(FieldPictures.draw(folder));
+            (folder, finished, mesh) -> {
+              noPictures.set(FieldPictures.draw(folder, mesh));
               return ReportWriter.writeFiles(folder, finished);
             });
     try {

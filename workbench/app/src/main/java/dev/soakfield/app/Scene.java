@@ -41,7 +41,8 @@ public final class Scene {
   private final Study study;
   private final ViewSettings settings;
   private BoundarySurface surface;
-  private PickIndex picker;
+  private double[] surfaceCorners;
+  private PickIndex picker; // built on the first pick: pictures drawn off screen never pick
   private float[] surfacePositions;
   private float[] surfaceNormals;
   private Mesh surfaceMesh;
@@ -72,10 +73,10 @@ public final class Scene {
     boolean changed = false;
     if (!pk.equals(partsKey)) {
       surface = BoundarySurface.of(g, shown);
-      double[] corners = PickIndex.corners(surface, g.xyz);
-      picker = new PickIndex(corners);
-      surfacePositions = toFloat(corners);
-      surfaceNormals = flatNormals(corners);
+      surfaceCorners = PickIndex.corners(surface, g.xyz);
+      picker = null;
+      surfacePositions = toFloat(surfaceCorners);
+      surfaceNormals = flatNormals(surfaceCorners);
       partsKey = pk;
       fieldKey = "";
       cutKey = "";
@@ -331,6 +332,9 @@ public final class Scene {
   /** The surface triangle under pixel (px, py) of the camera's picture, if any. */
   public Optional<PickIndex.Hit> pick(OrbitCamera camera, double px, double py) {
     double[] r = camera.ray(px, py);
+    if (picker == null) {
+      picker = new PickIndex(surfaceCorners);
+    }
     Optional<PickIndex.Hit> hit = picker.pick(r[0], r[1], r[2], r[3], r[4], r[5]);
     if (hit.isPresent() && settings.section().isPresent()) {
       // the surface beyond the section plane is clipped away: nothing shows there

@@ -31,6 +31,11 @@ public final class Study {
     return new Study(name, mesh, Optional.empty());
   }
 
+  /** A study of a run's results whose mesh is already in memory (see {@link StoredRun#open}). */
+  public static Study ofRun(StoredRun results) {
+    return new Study(results.folder(), results.mesh(), Optional.of(results));
+  }
+
   /**
    * Opens a mesh (.msh), a case (.json: its mesh) or a result folder.
    *

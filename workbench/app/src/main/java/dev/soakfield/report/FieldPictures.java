@@ -9,6 +9,7 @@ import dev.soakfield.app.Study;
 import dev.soakfield.app.ViewPicture;
 import dev.soakfield.app.ViewSettings;
 import dev.soakfield.fem.results.StoredRun;
+import dev.soakfield.mesh.TetMesh;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -30,25 +31,25 @@ public final class FieldPictures {
 
   private FieldPictures() {}
 
-  /** Draws the pictures of {@code results}; empty when drawn, else why the report has none. */
-  public static Optional<String> draw(Path results) {
+  /**
+   * Draws the pictures of the run in {@code results}, which worked on {@code mesh}; empty when
+   * drawn, else why the report has none.
+   */
+  public static Optional<String> draw(Path results, TetMesh mesh) {
     Optional<PictureMaker> maker = GraphicsServices.pictures();
     if (maker.isEmpty()) {
       return Optional.of(GraphicsServices.NO_WINDOW);
     }
     try {
-      Study study = Study.open(results);
-      Optional<StoredRun> r = study.results();
-      if (r.isEmpty()) {
-        return Optional.of(results + " holds no field frames");
-      }
+      StoredRun run = StoredRun.open(results, mesh);
+      Study study = Study.ofRun(run);
       double[] b = study.geometry().bounds();
       // a cut through the middle shows the inside, where a dried or held surface shows little
       ViewSettings.Plane mid = ViewSettings.Plane.parse("z:" + 0.5 * (b[2] + b[5]));
       Path folder = results.resolve(ReportWriter.PICTURES);
       Files.createDirectories(folder);
-      int last = r.get().frameCount() - 1;
-      int widest = widestSpread(r.get());
+      int last = run.frameCount() - 1;
+      int widest = widestSpread(run);
       ViewSettings settings = new ViewSettings();
       settings.field(Optional.of(FieldKind.CONCENTRATION));
       Scene scene = null; // one scene for every picture: its surface is built once
@@ -66,7 +67,7 @@ public final class FieldPictures {
               OrbitCamera.View.ISO,
               WIDTH,
               HEIGHT,
-              r.get().units().concentration(),
+              run.units().concentration(),
               folder.resolve(name + (section.isEmpty() ? "" : "-section") + ".png"));
         }
       }

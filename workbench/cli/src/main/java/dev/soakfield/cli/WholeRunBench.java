@@ -82,8 +82,8 @@ final class WholeRunBench {
           RunOptions.defaults()
               .withForce(true)
               .withCompletion(
-                  (folder, finished) -> {
-                    FieldPictures.draw(folder);
+                  (folder, finished, runMesh) -> {
+                    FieldPictures.draw(folder, runMesh);
                     return ReportWriter.writeFiles(folder, finished);
                   });
       long t2 = System.nanoTime();
