@@ -1,5 +1,6 @@
 package dev.soakfield.fem.run;
 
+import dev.soakfield.fem.assembly.FeSpace;
 import dev.soakfield.fem.assembly.PointLocator;
 import dev.soakfield.fem.casefile.ProbeSpec;
 import dev.soakfield.fem.model.ProbeSides;
@@ -22,13 +23,15 @@ final class ProbeWatch {
 
   ProbeWatch(
       List<ProbeSpec> specs,
-      PointLocator locator,
+      FeSpace space,
       double threshold,
       double[] tetS,
       double[] phi0,
       List<String> warnings) {
+    // the locator's search tree costs about as much as the matrices: built only for probes
+    PointLocator locator = specs.isEmpty() ? null : new PointLocator(space);
     for (ProbeSpec p : specs) {
-      Optional<PointLocator.Probe> found = ProbeSides.locate(p, locator.space().mesh(), locator);
+      Optional<PointLocator.Probe> found = ProbeSides.locate(p, space.mesh(), locator);
       if (found.isEmpty()) {
         warnings.add("probe '" + p.name() + "' lies outside the mesh; its column is empty");
       }

@@ -1,6 +1,5 @@
 package dev.soakfield.fem.run;
 
-import dev.soakfield.fem.assembly.PointLocator;
 import dev.soakfield.fem.assembly.SystemAssembler;
 import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.model.DiffusionModel;
@@ -103,7 +102,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     this.stepper = stepper;
     double[] phi0 = model.initialPhi();
     stepper.applyPrescribed(phi0, 0.0);
-    SystemAssembler asm = new SystemAssembler(model.space());
+    SystemAssembler asm = stepper.assembler();
     double threshold = spec.threshold().orElse(Double.NaN);
     temperatureNow = model.referenceTemperature();
     tetS = model.solubility();
@@ -112,9 +111,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     parts = new GroupMonitor(asm, tetS, scales, threshold, phi0, stepper.prescribedNodes());
     nodalS = NodalSolubility.of(mesh, shownS);
     clock = new ThresholdClock(spec.threshold().orElse(Double.POSITIVE_INFINITY), nodalS, phi0);
-    probes =
-        new ProbeWatch(
-            spec.probes(), new PointLocator(model.space()), threshold, shownS, phi0, warnings);
+    probes = new ProbeWatch(spec.probes(), model.space(), threshold, shownS, phi0, warnings);
     double[] ones = new double[mesh.tetCount()];
     Arrays.fill(ones, 1.0);
     double[] nodalOnes = new double[mesh.nodeCount()];

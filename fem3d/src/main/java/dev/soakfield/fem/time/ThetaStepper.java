@@ -28,6 +28,7 @@ import dev.soakfield.fem.solve.SolverStalledException;
  */
 public final class ThetaStepper {
   private final DiffusionModel model;
+  private final SystemAssembler asm;
   private final int n;
   private final BoundarySets boundary;
   private final double[] constantLoad;
@@ -48,7 +49,7 @@ public final class ThetaStepper {
   public ThetaStepper(
       DiffusionModel model, boolean lumped, double solverTolerance, int maxIterations) {
     this.model = model;
-    SystemAssembler asm = new SystemAssembler(model.space());
+    asm = new SystemAssembler(model.space());
     this.n = model.space().dofCount();
     constantLoad = new double[n];
     if (model.hasConstantSource()) {
@@ -65,6 +66,14 @@ public final class ThetaStepper {
     if (!laws.isEmpty()) {
       laws.initialize(model.initialPhi(), temperatureAt(0.0));
     }
+  }
+
+  /**
+   * The assembler of the model's mesh, for integrals over the results: its pattern and scatter maps
+   * take as long to build as the matrices, so the run's recorder shares it.
+   */
+  public SystemAssembler assembler() {
+    return asm;
   }
 
   /** The temperature a step ending at t sees (left limit), K. */

@@ -38,11 +38,16 @@ public final class CaseRun {
       throws IOException {
     RunSummary s;
     AtomicReference<Optional<String>> noPictures = new AtomicReference<>(Optional.empty());
+    // the renderer sets itself up on its own thread while the run goes on
+    Optional<PictureWorker> pictures = FieldPictures.start();
     // pictures and report are made before the folder says finished (see ResultFolder.finish)
     RunOptions reported =
         options.withCompletion(
             (folder, finished, mesh) -> {
-              noPictures.set(FieldPictures.draw(folder, mesh));
+              noPictures.set(
+                  pictures.isEmpty()
+                      ? Optional.of(GraphicsServices.NO_WINDOW)
+                      : FieldPictures.draw(folder, mesh, pictures.get()));
               return ReportWriter.writeFiles(folder, finished);
             });
     try {
@@ -51,6 +56,8 @@ public final class CaseRun {
       // the folder says "failed" and holds what was complete: a report of that part helps
       ReportWriter.write(out);
       throw e;
+    } finally {
+      pictures.ifPresent(PictureWorker::close);
     }
     return new Outcome(s, noPictures.get());
   }

@@ -1,9 +1,8 @@
 package dev.soakfield.report;
 
 import dev.soakfield.app.FieldKind;
-import dev.soakfield.app.GraphicsServices;
 import dev.soakfield.app.OrbitCamera;
-import dev.soakfield.app.PictureMaker;
+import dev.soakfield.app.PictureWorker;
 import dev.soakfield.app.Scene;
 import dev.soakfield.app.Study;
 import dev.soakfield.app.ViewPicture;
@@ -31,15 +30,17 @@ public final class FieldPictures {
 
   private FieldPictures() {}
 
+  /** A worker setting up for the report's pictures; empty in a build without a renderer. */
+  public static Optional<PictureWorker> start() {
+    return PictureWorker.start(WIDTH, HEIGHT);
+  }
+
   /**
-   * Draws the pictures of the run in {@code results}, which worked on {@code mesh}; empty when
-   * drawn, else why the report has none.
+   * Draws the pictures of the run in {@code results}, which worked on {@code mesh}, with a worker
+   * started earlier (see {@link #start}) whose set-up has overlapped the run; empty when drawn,
+   * else why the report has none.
    */
-  public static Optional<String> draw(Path results, TetMesh mesh) {
-    Optional<PictureMaker> maker = GraphicsServices.pictures();
-    if (maker.isEmpty()) {
-      return Optional.of(GraphicsServices.NO_WINDOW);
-    }
+  public static Optional<String> draw(Path results, TetMesh mesh, PictureWorker worker) {
     try {
       StoredRun run = StoredRun.open(results, mesh);
       Study study = Study.ofRun(run);
@@ -61,7 +62,7 @@ public final class FieldPictures {
           settings.section(section);
           scene = scene == null ? new Scene(study, settings) : scene;
           ViewPicture.write(
-              maker.get(),
+              worker,
               study,
               scene,
               OrbitCamera.View.ISO,

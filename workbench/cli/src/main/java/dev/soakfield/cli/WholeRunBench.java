@@ -1,9 +1,11 @@
 package dev.soakfield.cli;
 
+import dev.soakfield.app.PictureWorker;
 import dev.soakfield.fem.results.Series;
 import dev.soakfield.fem.run.RunOptions;
 import dev.soakfield.fem.run.RunPipeline;
 import dev.soakfield.fem.run.RunProgress;
+import dev.soakfield.fem.run.RunSummary;
 import dev.soakfield.fem.run.RunTimes;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.gen.StructuredMesher;
@@ -18,6 +20,7 @@ import java.lang.management.MemoryType;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.concurrent.atomic.AtomicReference;
 
 /**
@@ -64,6 +67,8 @@ final class WholeRunBench {
                   dt,
                   Math.max(1, steps / 2) * dt, // on a step: an output between steps would split one
                   end));
+      // as a run of the command line: the renderer sets itself up while the case is read and run
+      Optional<PictureWorker> pictures = FieldPictures.start();
       long t1 = System.nanoTime();
       RunPipeline.Prepared prepared = RunPipeline.prepare(caseFile);
       double read = (System.nanoTime() - t1) * 1e-9;
@@ -83,11 +88,16 @@ final class WholeRunBench {
               .withForce(true)
               .withCompletion(
                   (folder, finished, runMesh) -> {
-                    FieldPictures.draw(folder, runMesh);
+                    pictures.ifPresent(w -> FieldPictures.draw(folder, runMesh, w));
                     return ReportWriter.writeFiles(folder, finished);
                   });
       long t2 = System.nanoTime();
-      var summary = RunPipeline.run(prepared, dir.resolve("out"), progress, options);
+      RunSummary summary;
+      try {
+        summary = RunPipeline.run(prepared, dir.resolve("out"), progress, options);
+      } finally {
+        pictures.ifPresent(PictureWorker::close);
+      }
       double run = (System.nanoTime() - t2) * 1e-9;
       RunTimes t = times.get();
       double amount = Series.read(dir.resolve("out/series.csv")).last("amount");

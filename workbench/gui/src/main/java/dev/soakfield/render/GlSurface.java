@@ -4,6 +4,7 @@ import static org.lwjgl.glfw.GLFW.*;
 import static org.lwjgl.opengl.GL33C.*;
 
 import java.awt.image.BufferedImage;
+import java.awt.image.DataBufferInt;
 import java.nio.ByteBuffer;
 import org.lwjgl.system.MemoryUtil;
 
@@ -125,13 +126,15 @@ public final class GlSurface implements AutoCloseable {
       }
       glReadPixels(0, 0, width, height, GL_RGBA, GL_UNSIGNED_BYTE, px);
       BufferedImage img = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
+      // straight into the image's own pixel array: setRGB goes through the colour model per pixel
+      int[] rgb = ((DataBufferInt) img.getRaster().getDataBuffer()).getData();
       for (int y = 0; y < height; y++) {
         int row = (height - 1 - y) * width * 4;
+        int out = y * width;
         for (int x = 0; x < width; x++) {
           int o = row + 4 * x;
-          int rgb =
+          rgb[out + x] =
               ((px.get(o) & 0xff) << 16) | ((px.get(o + 1) & 0xff) << 8) | (px.get(o + 2) & 0xff);
-          img.setRGB(x, y, rgb);
         }
       }
       return img;

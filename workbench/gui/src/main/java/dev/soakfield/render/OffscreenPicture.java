@@ -19,6 +19,14 @@ public final class OffscreenPicture implements AutoCloseable {
     renderer = new SceneRenderer();
   }
 
+  public int width() {
+    return surface.width();
+  }
+
+  public int height() {
+    return surface.height();
+  }
+
   public SceneRenderer renderer() {
     return renderer;
   }
