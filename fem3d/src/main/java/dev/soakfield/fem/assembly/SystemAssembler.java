@@ -22,10 +22,12 @@ public final class SystemAssembler {
 
   private final FeSpace space;
   private final int threads;
-  private final CsrMatrix pattern;
+  // the pattern alone: a matrix of it would hold a values array nobody reads (30 MB at 1.5M tets)
+  private final int[] rowStart;
+  private final int[] cols;
   private final TetColouring colouring;
-  private final int[] tetPos;
-  private final int[] facePos;
+  private final ScatterMap tetPos;
+  private final ScatterMap facePos;
 
   /** Builds the CSR pattern, colouring and position maps once from the connectivity. */
   public SystemAssembler(FeSpace space) {
@@ -50,7 +52,9 @@ public final class SystemAssembler {
     }
     this.threads = threads;
     checkOrientation(space);
-    this.pattern = SparsityPattern.build(space, threads, minPart);
+    CsrMatrix pattern = SparsityPattern.build(space, threads, minPart);
+    this.rowStart = pattern.rowStart();
+    this.cols = pattern.cols();
     this.colouring =
         TetColouring.of(space.tetNodes(), space.nodesPerTet(), space.dofCount(), blockSize);
     this.tetPos =
@@ -65,7 +69,7 @@ public final class SystemAssembler {
 
   /** A matrix with all values zero on the shared pattern. */
   public CsrMatrix newMatrix() {
-    return pattern.zeroCopy();
+    return new CsrMatrix(space.dofCount(), rowStart, cols);
   }
 
   /** Number of colours of the block colouring (for reports). */
@@ -96,16 +100,11 @@ public final class SystemAssembler {
     checkPattern(target);
     checkLength("coefPerTet", coefPerTet, space.mesh().tetCount());
     double[] values = target.values();
-    int per = space.nodesPerTet();
     if (lumped) {
       forEachTet(
           (kernel, t, x, ke) -> {
             kernel.lumpedMass(x, ke);
-            double s = scale * coefPerTet[t];
-            int base = t * per * per;
-            for (int i = 0; i < per; i++) {
-              values[tetPos[base + i * (per + 1)]] += s * ke[i];
-            }
+            tetPos.addDiagonal(values, t, ke, scale * coefPerTet[t]);
           });
     } else {
       forEachTet(
@@ -131,11 +130,7 @@ public final class SystemAssembler {
       int f = faces[k];
       FeSpace.gather(space.coordinates(), space.faceNodes(), f, per, x);
       kernel.mass(x, me);
-      double s = scale * coefPerFace[k];
-      int base = f * nn;
-      for (int e = 0; e < nn; e++) {
-        values[facePos[base + e]] += s * me[e];
-      }
+      facePos.add(values, f, me, scale * coefPerFace[k]);
     }
   }
 
@@ -251,18 +246,13 @@ public final class SystemAssembler {
   }
 
   private void scatterMatrix(double[] values, int t, double[] ke, double scale) {
-    int nn = ke.length;
-    int base = t * nn;
-    for (int e = 0; e < nn; e++) {
-      values[tetPos[base + e]] += scale * ke[e];
-    }
+    tetPos.add(values, t, ke, scale);
   }
 
   private void checkPattern(CsrMatrix target) {
     Objects.requireNonNull(target, "target");
-    if (target.cols() != pattern.cols()
-        && !(Arrays.equals(target.rowStart(), pattern.rowStart())
-            && Arrays.equals(target.cols(), pattern.cols()))) {
+    if (target.cols() != cols
+        && !(Arrays.equals(target.rowStart(), rowStart) && Arrays.equals(target.cols(), cols))) {
       throw new IllegalArgumentException(
           "target matrix does not have this assembler's pattern (make it with newMatrix())");
     }

@@ -27,7 +27,8 @@ final class CoefficientCache {
     long lastUse;
     final CsrMatrix capacity = asm.newMatrix();
     final CsrMatrix stiffness = asm.newMatrix();
-    final CsrMatrix sink = asm.newMatrix(); // first-order source: k S mass
+    // first-order source: k S mass; none without such a source (a matrix is 30 MB at 1.5M tets)
+    final CsrMatrix sink = model.hasFirstOrderSource() ? asm.newMatrix() : null;
     final double[] capacityRowSums = new double[n];
     final double[] sinkRowSums = new double[n];
     final List<CsrMatrix> exchangeMass = new ArrayList<>();
@@ -42,18 +43,18 @@ final class CoefficientCache {
       asm.addCapacity(capacity, s, lumped, 1.0);
       stiffness.setZero();
       asm.addStiffness(stiffness, k, 1.0);
-      sink.setZero();
-      if (model.hasFirstOrderSource()) {
+      double[] ones = new double[n];
+      Arrays.fill(ones, 1.0);
+      if (sink != null) {
+        sink.setZero();
         double[] ks = new double[s.length];
         for (int t = 0; t < ks.length; t++) {
           ks[t] = model.firstOrderRate()[t] * s[t];
         }
         asm.addCapacity(sink, ks, lumped, 1.0);
+        sink.multiply(ones, sinkRowSums);
       }
-      double[] ones = new double[n];
-      Arrays.fill(ones, 1.0);
       capacity.multiply(ones, capacityRowSums);
-      sink.multiply(ones, sinkRowSums);
       boolean first = exchangeMass.isEmpty();
       for (int g = 0; g < boundary.exchanges.size(); g++) {
         int[] faces = boundary.exchanges.get(g).condition().faces();
@@ -98,8 +99,11 @@ final class CoefficientCache {
     for (int k = 0; k < cache.length; k++) {
       Coefficients c = cache[k];
       if (c == null) {
+        // a second set only when a second temperature comes: at one temperature it never does
         c = new Coefficients();
         cache[k] = c;
+        oldest = c;
+        break;
       }
       if (c.temperature == kelvin) {
         c.lastUse = useCounter;

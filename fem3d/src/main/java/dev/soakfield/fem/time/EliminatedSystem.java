@@ -20,7 +20,7 @@ final class EliminatedSystem {
   private final int n;
   private final CsrMatrix system;
   private final CsrMatrix unreduced; // the same system before elimination, for the reactions
-  private final CsrMatrix jacobian; // system plus the laws' derivative on the diagonal
+  private CsrMatrix jacobian; // system plus the laws' derivative on the diagonal; made when needed
   private final int[] eliminated; // CSR positions in free rows whose column is prescribed
   private final int[] diagonalPosition;
   // Prescribed rows keep their own diagonal (x_i = φ_D scaled by it), so they do not dominate ‖b‖
@@ -44,7 +44,6 @@ final class EliminatedSystem {
     this.n = model.space().dofCount();
     system = asm.newMatrix();
     unreduced = system.zeroCopy();
-    jacobian = system.zeroCopy();
     eliminated = eliminatedPositions();
     diagonalPosition = new int[n];
     for (int i = 0; i < n; i++) {
@@ -191,6 +190,9 @@ final class EliminatedSystem {
    * dominate the capacity term, and reused after.
    */
   int solveJacobian(double[] dq, double dt, boolean firstIteration, double[] rhs, double[] delta) {
+    if (jacobian == null) {
+      jacobian = system.zeroCopy(); // only runs with source laws take Newton steps
+    }
     double[] a = jacobian.values();
     System.arraycopy(system.values(), 0, a, 0, a.length);
     for (int i = 0; i < n; i++) {
