@@ -143,6 +143,27 @@ public final class TetMesh {
     return faceGroup.clone();
   }
 
+  /**
+   * The mesh's own arrays, not copies, for readers of millions of entries that must not hold a
+   * second copy of a large mesh (the solver's element loops, the picture's geometry). Read only:
+   * the mesh stays immutable only as long as these readers never write into them.
+   */
+  public Shared shared() {
+    return new Shared(xyz, tets, tetGroup, faces, faceGroup);
+  }
+
+  /**
+   * See {@link #shared()}.
+   *
+   * @param xyz node coordinates x0, y0, z0, x1, ...
+   * @param tets connectivity, {@link #nodesPerTet()} entries per tetrahedron
+   * @param tetGroups volume group index per tetrahedron
+   * @param faces connectivity, {@link #nodesPerFace()} entries per face
+   * @param faceGroups face group index per face
+   */
+  @SuppressWarnings("ArrayRecordComponent") // shared on purpose, see above
+  public record Shared(double[] xyz, int[] tets, int[] tetGroups, int[] faces, int[] faceGroups) {}
+
   /** True when both meshes hold the same numbers, connectivity and groups (names, tags, kinds). */
   public boolean sameAs(TetMesh other) {
     return order == other.order

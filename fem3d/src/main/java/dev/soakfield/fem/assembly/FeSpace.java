@@ -15,9 +15,10 @@ public final class FeSpace {
 
   private FeSpace(TetMesh mesh) {
     this.mesh = mesh;
-    this.xyz = mesh.copyCoordinates();
-    this.tets = mesh.copyTets();
-    this.faces = mesh.copyFaces();
+    TetMesh.Shared own = mesh.shared(); // read only, as this class uses them: no second copy
+    this.xyz = own.xyz();
+    this.tets = own.tets();
+    this.faces = own.faces();
   }
 
   /** The space of the mesh's order. */

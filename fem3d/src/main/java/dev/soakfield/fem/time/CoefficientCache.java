@@ -48,8 +48,9 @@ final class CoefficientCache {
       if (sink != null) {
         sink.setZero();
         double[] ks = new double[s.length];
+        double[] rate = model.firstOrderRate();
         for (int t = 0; t < ks.length; t++) {
-          ks[t] = model.firstOrderRate()[t] * s[t];
+          ks[t] = rate[t] * s[t];
         }
         asm.addCapacity(sink, ks, lumped, 1.0);
         sink.multiply(ones, sinkRowSums);

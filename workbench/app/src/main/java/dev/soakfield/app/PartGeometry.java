@@ -23,13 +23,14 @@ public final class PartGeometry {
   private final double[] bounds;
 
   private PartGeometry(TetMesh mesh) {
-    this.xyz = mesh.copyCoordinates();
-    this.tets = mesh.copyTets();
+    TetMesh.Shared own = mesh.shared(); // read only here: no second copy of a large mesh
+    this.xyz = own.xyz();
+    this.tets = own.tets();
     this.nodesPerTet = mesh.nodesPerTet();
-    this.tetPart = mesh.copyTetGroups();
-    this.faces = mesh.copyFaces();
+    this.tetPart = own.tetGroups();
+    this.faces = own.faces();
     this.nodesPerFace = mesh.nodesPerFace();
-    this.faceGroupOfFace = mesh.copyFaceGroups();
+    this.faceGroupOfFace = own.faceGroups();
     List<String> parts = new ArrayList<>();
     for (VolumeGroup g : mesh.volumeGroups()) {
       parts.add(g.name());
