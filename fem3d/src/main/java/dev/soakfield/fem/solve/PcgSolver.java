@@ -47,16 +47,21 @@ public final class PcgSolver {
     this.kind = Objects.requireNonNull(kind, "kind");
   }
 
+  /** Declares the matrix for one solve; see {@link #setMatrix(CsrMatrix, int)}. */
+  public void setMatrix(CsrMatrix a) {
+    setMatrix(a, 1);
+  }
+
   /**
    * Declares the matrix for the following solves (call again when its values change) and builds the
-   * preconditioner. With AUTO the choice follows {@link PreconditionerChoice}: Jacobi when at least
-   * half of the rows have a row sum of at least 5 % of their diagonal (the capacity term M/Δt
-   * dominates: short steps), AMG otherwise.
+   * preconditioner. With AUTO the choice follows {@link PreconditionerChoice}: the cheaper of
+   * Jacobi and AMG in iterations over the {@code expectedSolves} solves that will use this matrix,
+   * AMG's set-up included.
    *
    * @throws IllegalArgumentException when a diagonal entry is not positive and finite (the matrix
    *     cannot be positive definite)
    */
-  public void setMatrix(CsrMatrix a) {
+  public void setMatrix(CsrMatrix a, int expectedSolves) {
     Objects.requireNonNull(a, "matrix");
     long start = System.nanoTime();
     double[] diagonal = a.diagonal();
@@ -71,7 +76,9 @@ public final class PcgSolver {
       }
     }
     PreconditionerKind chosen =
-        kind == PreconditionerKind.AUTO ? PreconditionerChoice.choose(a, diagonal) : kind;
+        kind == PreconditionerKind.AUTO
+            ? PreconditionerChoice.choose(a, diagonal, expectedSolves, relativeTolerance)
+            : kind;
     amg = chosen == PreconditionerKind.JACOBI ? null : new AmgPreconditioner(AmgHierarchy.build(a));
     inverseDiagonal = inverse(diagonal);
     matrix = a;

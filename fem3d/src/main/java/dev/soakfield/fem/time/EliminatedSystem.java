@@ -18,6 +18,10 @@ final class EliminatedSystem {
   private final DiffusionModel model;
   private final BoundarySets boundary;
   private final int n;
+
+  /** Newton corrections expected per step, which share the step's Jacobian (common practice). */
+  private static final int NEWTON_SOLVES = 3;
+
   private final CsrMatrix system;
   private final CsrMatrix unreduced; // the same system before elimination, for the reactions
   private CsrMatrix jacobian; // system plus the laws' derivative on the diagonal; made when needed
@@ -28,6 +32,7 @@ final class EliminatedSystem {
   private final double[] prescribedDiagonal;
   private final PcgSolver solver;
   private boolean solverHasSystem;
+  private int expectedSolves = 1;
   private double systemDt = Double.NaN;
   private double systemTheta = Double.NaN;
   private double systemTemperature = Double.NaN;
@@ -156,7 +161,7 @@ final class EliminatedSystem {
               + " from a held, flux or exchange value or a coefficient of extreme size");
     }
     if (!solverHasSystem) {
-      solver.setMatrix(system);
+      solver.setMatrix(system, expectedSolves);
       solverHasSystem = true;
     }
     return solver.solve(b, phi1).iterations();
@@ -184,6 +189,11 @@ final class EliminatedSystem {
     return b;
   }
 
+  /** See {@link ThetaStepper#expectSolvesPerMatrix}. */
+  void expectSolvesPerMatrix(int solves) {
+    expectedSolves = solves;
+  }
+
   /**
    * Solves (system − dt·diag(dq) on the free rows) delta = rhs: one Newton correction. The
    * preconditioner is rebuilt on the first iteration of a step, where the laws' derivative may
@@ -202,7 +212,7 @@ final class EliminatedSystem {
     }
     solverHasSystem = false;
     if (firstIteration) {
-      solver.setMatrix(jacobian);
+      solver.setMatrix(jacobian, NEWTON_SOLVES);
     } else {
       solver.replaceMatrix(jacobian);
     }

@@ -76,6 +76,14 @@ public final class ThetaStepper {
     return asm;
   }
 
+  /**
+   * How many solves are expected to share one step matrix (all the steps of a run with fixed steps,
+   * one with adaptive steps): the automatic preconditioner choice weighs AMG's set-up against it.
+   */
+  public void expectSolvesPerMatrix(int solves) {
+    system.expectSolvesPerMatrix(solves);
+  }
+
   /** The temperature a step ending at t sees (left limit), K. */
   private double temperatureAt(double t) {
     return model.temperature().at(t);

@@ -63,6 +63,9 @@ public final class TransientRun {
     double previousDt = 0;
     double t = 0;
     double dt = s.adaptive() ? Math.min(s.initialStep(), s.maxStep()) : s.fixedStep();
+    // fixed steps reuse one matrix for the whole run: the preconditioner's set-up is worth more
+    stepper.expectSolvesPerMatrix(
+        s.adaptive() ? 1 : (int) Math.min(Integer.MAX_VALUE, Math.max(1, Math.round(end / dt))));
     double ladderBase = dt;
     int steps = 0;
     int rejected = 0;
