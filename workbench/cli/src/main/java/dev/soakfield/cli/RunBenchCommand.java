@@ -32,13 +32,19 @@ final class RunBenchCommand implements Callable<Integer> {
       description = "Step length as dt*D/h^2 (default 1).")
   double ratio;
 
+  @Option(
+      names = "--order",
+      defaultValue = "1",
+      description = "Element order: 1 (4-node) or 2 (10-node tetrahedra) (default 1).")
+  int order;
+
   @Override
   public Integer call() throws java.io.IOException {
-    if (cells < 2 || steps < 1 || !(ratio > 0)) {
+    if (cells < 2 || steps < 1 || !(ratio > 0) || (order != 1 && order != 2)) {
       throw new UserInputException(
-          "--cells at least 2, --steps at least 1 and --ratio positive expected");
+          "--cells at least 2, --steps at least 1, --ratio positive and --order 1 or 2 expected");
     }
-    WholeRunBench.run(spec.commandLine().getOut(), cells, steps, ratio);
+    WholeRunBench.run(spec.commandLine().getOut(), cells, steps, ratio, order);
     return ExitCodes.OK;
   }
 }

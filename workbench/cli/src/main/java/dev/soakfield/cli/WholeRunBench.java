@@ -39,7 +39,7 @@ final class WholeRunBench {
 
   private WholeRunBench() {}
 
-  static void run(PrintWriter out, int n, int steps, double ratio) throws IOException {
+  static void run(PrintWriter out, int n, int steps, double ratio, int order) throws IOException {
     double jvmStart = ManagementFactory.getRuntimeMXBean().getUptime() * 1e-3;
     Path dir = Files.createTempDirectory("soakfield-bench-run");
     try {
@@ -47,7 +47,7 @@ final class WholeRunBench {
       double dt = ratio * h * h / D;
       double end = steps * dt;
       long t0 = System.nanoTime();
-      TetMesh mesh = StructuredMesher.box(SIZE, SIZE, SIZE, n, n, n, 1);
+      TetMesh mesh = StructuredMesher.box(SIZE, SIZE, SIZE, n, n, n, order);
       Path meshFile = dir.resolve("box.msh");
       MshWriter.write(meshFile, mesh, false);
       double generate = (System.nanoTime() - t0) * 1e-9;
@@ -146,9 +146,10 @@ final class WholeRunBench {
       throws IOException {
     out.printf(
         Locale.ROOT,
-        "box: %d tetrahedra, %d nodes (%.0f MB MSH 4.1 ASCII); %d backward-Euler steps at"
+        "box: %d %s tetrahedra, %d nodes (%.0f MB MSH 4.1 ASCII); %d backward-Euler steps at"
             + " dt*D/h^2 = %.3g%n",
         mesh.tetCount(),
+        mesh.order() == 2 ? "quadratic" : "linear",
         mesh.nodeCount(),
         Files.size(meshFile) / 1e6,
         steps,
@@ -172,6 +173,13 @@ final class WholeRunBench {
     row(out, "folder and bookkeeping", other, whole);
     out.printf(
         Locale.ROOT, "whole run %.2f s = %.2f x its pure solve time%n", whole, whole / t.solves());
+    // per node and step: compares mesh sizes and element orders (flat when work grows with size)
+    double perNodeStep = 1e9 / ((double) mesh.nodeCount() * steps);
+    out.printf(
+        Locale.ROOT,
+        "per node and step: whole %.0f ns, solves %.0f ns%n",
+        whole * perNodeStep,
+        t.solves() * perNodeStep);
   }
 
   private static void row(PrintWriter out, String what, double seconds, double whole) {

@@ -12,9 +12,10 @@ import org.junit.jupiter.api.Test;
  * check holds (a flux-fed box with every other face sealed holds exactly flux × area × time).
  */
 class BenchCommandsTest {
-  @Test
-  void theWholeRunBenchPrintsItsPhasesAndTheAmountMatchesTheFlux() {
-    CliRun r = CliRun.of("bench", "run", "--cells", "6", "--steps", "5");
+  @org.junit.jupiter.params.ParameterizedTest
+  @org.junit.jupiter.params.provider.ValueSource(strings = {"1", "2"})
+  void theWholeRunBenchPrintsItsPhasesAndTheAmountMatchesTheFlux(String order) {
+    CliRun r = CliRun.of("bench", "run", "--cells", "6", "--steps", "5", "--order", order);
     assertEquals(ExitCodes.OK, r.exitCode(), r.err());
     for (String phase :
         new String[] {
@@ -24,7 +25,10 @@ class BenchCommandsTest {
           "per-step rest",
           "field outputs",
           "report and pictures",
-          "x its pure solve time"
+          "x its pure solve time",
+          "per node and step",
+          "live heap",
+          order.equals("2") ? "quadratic tetrahedra, 2197 nodes" : "linear tetrahedra, 343 nodes"
         }) {
       assertTrue(r.out().contains(phase), phase + " in:\n" + r.out());
     }
