@@ -8,13 +8,14 @@ import java.util.Locale;
  * How much Java heap a run will need, from the mesh alone, so a run that cannot fit is refused
  * before it starts instead of failing hours in.
  *
- * <p>Linear: about 900 bytes per tetrahedron, the peak heap measured end to end by {@code soakfield
- * bench run}. Quadratic: measured here as the smallest heap a whole run completes in, on a 24³-cell
+ * <p>Linear: 400 bytes per tetrahedron. The smallest heap a whole run of the 64³-cell box of {@code
+ * soakfield bench run} (1.57M tetrahedra, 100 fixed steps, frames, the report and its pictures)
+ * completed in lies between 450 and 520 MiB: 300 to 347 bytes per tetrahedron. Quadratic: measured here as the smallest heap a whole run completes in, on a 24³-cell
  * box (82 944 tetrahedra, 10 fixed steps, results written): between 50 and 60 MB linear and between
  * 400 and 450 MB quadratic, a ratio of about 7.7 (eight times the nodes, four times the non-zeros
- * per row, 10-node element tables), hence about 5 200 bytes per quadratic tetrahedron. A quarter on
- * top covers the collector's headroom; the estimate errs on the generous side for linear runs
- * (about twice the smallest heap that works).
+ * per row, 10-node element tables), hence about 5 200 bytes per quadratic tetrahedron, measured
+ * before the matrices and tables were trimmed and so generous now. A quarter on top covers the
+ * collector's headroom.
  *
  * <p>A case adds its series, which the report reads whole: every column (probes, per-group and
  * per-face columns) for every step. Measured on the sample case (1 521 nodes, about 111 steps):
@@ -25,8 +26,8 @@ import java.util.Locale;
  * figure for their summary entries.
  */
 public record MemoryEstimate(long tets, int order, long bytes) {
-  /** Measured peak heap per linear tetrahedron, end to end (bytes). */
-  public static final long LINEAR_BYTES_PER_TET = 900;
+  /** Heap per linear tetrahedron, end to end, from the smallest heap measured (bytes). */
+  public static final long LINEAR_BYTES_PER_TET = 400;
 
   /** Measured peak heap per quadratic tetrahedron, end to end (bytes). */
   public static final long QUADRATIC_BYTES_PER_TET = 5200;
