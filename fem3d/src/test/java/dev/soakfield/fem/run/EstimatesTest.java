@@ -24,7 +24,7 @@ class EstimatesTest {
     MemoryEstimate linear = MemoryEstimate.of(mesh, 1);
     MemoryEstimate quadratic = MemoryEstimate.of(mesh, 2);
     assertEquals(6000, linear.tets());
-    assertEquals((long) (1.25 * ((32L << 20) + 900L * 6000)), linear.bytes());
+    assertEquals((long) (1.25 * ((32L << 20) + 400L * 6000)), linear.bytes());
     assertTrue(quadratic.bytes() > linear.bytes());
     linear.requireHeap(linear.bytes()); // exactly enough passes
     HeapTooSmallException e =
