@@ -10,12 +10,12 @@ import java.util.Locale;
  *
  * <p>Linear: 400 bytes per tetrahedron. The smallest heap a whole run of the 64³-cell box of {@code
  * soakfield bench run} (1.57M tetrahedra, 100 fixed steps, frames, the report and its pictures)
- * completed in lies between 450 and 520 MiB: 300 to 347 bytes per tetrahedron. Quadratic: measured here as the smallest heap a whole run completes in, on a 24³-cell
- * box (82 944 tetrahedra, 10 fixed steps, results written): between 50 and 60 MB linear and between
- * 400 and 450 MB quadratic, a ratio of about 7.7 (eight times the nodes, four times the non-zeros
- * per row, 10-node element tables), hence about 5 200 bytes per quadratic tetrahedron, measured
- * before the matrices and tables were trimmed and so generous now. A quarter on top covers the
- * collector's headroom.
+ * completed in lies between 450 and 520 MiB: 300 to 347 bytes per tetrahedron. Quadratic: measured
+ * here as the smallest heap a whole run completes in, on a 24³-cell box (82 944 tetrahedra, 10
+ * fixed steps, results written): between 50 and 60 MB linear and between 400 and 450 MB quadratic,
+ * a ratio of about 7.7 (eight times the nodes, four times the non-zeros per row, 10-node element
+ * tables), hence about 5 200 bytes per quadratic tetrahedron, measured before the matrices and
+ * tables were trimmed and so generous now. A quarter on top covers the collector's headroom.
  *
  * <p>A case adds its series, which the report reads whole: every column (probes, per-group and
  * per-face columns) for every step. Measured on the sample case (1 521 nodes, about 111 steps):
