@@ -15,6 +15,7 @@ public final class Verification {
     checks.addAll(PlaneSheet.run(1, 80, 2.5e-4, 1e-2));
     checks.addAll(CompositeWall.run());
     checks.addAll(MaximumPrinciple.run());
+    checks.add(GradientFluxBalance.run());
     checks.addAll(ExchangeAndSink.run(false));
     checks.addAll(ExchangeAndSink.run(true));
     checks.addAll(ExchangeSheet.run());
