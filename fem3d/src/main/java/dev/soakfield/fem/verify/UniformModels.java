@@ -84,6 +84,36 @@ final class UniformModels {
     return new DiffusionModel(FeSpace.of(mesh), sol, tensor, rate, new double[tets], faces, phi0);
   }
 
+  /** The same model starting from the potential {@code phi0} (one value per node). */
+  static DiffusionModel startingFrom(DiffusionModel m, double[] phi0) {
+    return new DiffusionModel(
+        m.space(),
+        m.solubility(),
+        m.conductance(),
+        m.firstOrderRate(),
+        m.constantRate(),
+        m.faces(),
+        phi0);
+  }
+
+  /** The exact field at every node of the mesh. */
+  static double[] atNodes(TetMesh mesh, ExactField f) {
+    double[] u = new double[mesh.nodeCount()];
+    for (int v = 0; v < u.length; v++) {
+      u[v] = f.value(mesh.coord(v, 0), mesh.coord(v, 1), mesh.coord(v, 2));
+    }
+    return u;
+  }
+
+  /** Every face group of the mesh held at c. */
+  static Map<String, Condition> allHeld(TetMesh mesh, double c) {
+    Map<String, Condition> m = new java.util.LinkedHashMap<>();
+    for (var g : mesh.faceGroups()) {
+      m.put(g.name(), Condition.concentration(c));
+    }
+    return m;
+  }
+
   static double[] filled(int n, double v) {
     double[] a = new double[n];
     Arrays.fill(a, v);

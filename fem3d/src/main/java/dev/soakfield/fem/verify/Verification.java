@@ -23,6 +23,7 @@ public final class Verification {
     checks.add(DecayingMode.spatialRate(2, 4, 2.9));
     checks.add(DecayingMode.temporalRate(false, 0.9));
     checks.add(DecayingMode.temporalRate(true, 1.9));
+    checks.addAll(RoundParts.checks());
     return checks;
   }
 }
