@@ -19,11 +19,9 @@ public final class Verification {
     checks.addAll(ExchangeAndSink.run(false));
     checks.addAll(ExchangeAndSink.run(true));
     checks.addAll(ExchangeSheet.run());
-    checks.add(DecayingMode.spatialRate(1, 8, 1.9));
-    checks.add(DecayingMode.spatialRate(2, 4, 2.9));
-    checks.add(DecayingMode.temporalRate(false, 0.9));
-    checks.add(DecayingMode.temporalRate(true, 1.9));
     checks.addAll(RoundParts.checks());
+    checks.addAll(Manufactured.checks());
+    checks.addAll(DampedStart.checks());
     return checks;
   }
 }

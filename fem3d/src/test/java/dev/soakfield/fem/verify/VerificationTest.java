@@ -8,8 +8,9 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 /**
- * The built-in verification cases; each reference value and its source (Crank 1975, Brenner &
- * Scott, exact conservation, the discrete maximum principle) is named where the case defines it.
+ * The built-in verification cases; each reference value and its source (Crank 1975, exact
+ * conservation, the discrete maximum principle) is named where the case defines it. Orders of
+ * convergence: RoundPartsTest and ManufacturedTest.
  */
 class VerificationTest {
   private static void assertAllPass(List<Check> checks) {
@@ -100,16 +101,6 @@ class VerificationTest {
     assertEquals(1 - Math.exp(-0.1), ExchangeSheet.fractionalUptake(1e-4, 1e3), 1e-4);
     // negative control: the two limits differ, so the series is not a constant
     assertTrue(ExchangeSheet.fractionalUptake(1, 0.4) < 0.697882 - 0.1);
-  }
-
-  @Test
-  void spatialAndTemporalRatesReachTheirOrders() {
-    assertAllPass(
-        List.of(
-            DecayingMode.spatialRate(1, 8, 1.9),
-            DecayingMode.spatialRate(2, 4, 2.9),
-            DecayingMode.temporalRate(false, 0.9),
-            DecayingMode.temporalRate(true, 1.9)));
   }
 
   @Test

@@ -30,8 +30,15 @@ final class VerifyCommand implements Callable<Integer> {
       case NEAR -> v;
       case AT_MOST -> "<= " + v;
       case AT_LEAST -> ">= " + v;
-      case ORDER -> String.format(Locale.ROOT, "%.0f +- %.2f", c.reference(), c.tolerance());
+      case ORDER -> expected(c.reference()) + String.format(Locale.ROOT, " +- %.2f", c.tolerance());
     };
+  }
+
+  /** An expected order: 2, or 0.5. */
+  private static String expected(double order) {
+    return order == Math.rint(order)
+        ? String.valueOf((long) order)
+        : String.format(Locale.ROOT, "%.2g", order);
   }
 
   /** The observed orders of convergence beside the expected ones, one line each. */
@@ -45,9 +52,9 @@ final class VerifyCommand implements Callable<Integer> {
     for (Check c : orders) {
       out.printf(
           Locale.ROOT,
-          "%-9.2f %-9.0f %-12s %s%s%n",
+          "%-9.2f %-9s %-12s %s%s%n",
           c.computed(),
-          c.reference(),
+          expected(c.reference()),
           String.format(
               Locale.ROOT,
               "%.2f..%.2f",
