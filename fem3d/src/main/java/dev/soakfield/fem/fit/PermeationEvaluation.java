@@ -17,7 +17,7 @@ import org.apache.commons.math3.stat.regression.SimpleRegression;
  *       integral of J approaches (Crank eq. 4.24a, exact L²/(6D)), fitted to the points after four
  *       time lags;
  *   <li>breakthrough time t_b: the time at J/J_ss = 0.1, D_b = L²/(15.3·t_b) (ISO 17081 / ASTM
- *       G148, from memory; on the exact transient J/J_ss = 0.1 at D·t/L² = 1/15.31);
+ *       G148, from memory; on the exact transient J/J_ss = 0.1 at D·t/L² = 1/15.13);
  *   <li>effective diffusivity D_eff = D_lag, and subsurface concentration C0 = J_ss·L/D_eff.
  * </ul>
  */

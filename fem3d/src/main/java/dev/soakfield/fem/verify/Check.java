@@ -27,7 +27,12 @@ public record Check(
     /** computed at most reference */
     AT_MOST,
     /** computed at least reference */
-    AT_LEAST
+    AT_LEAST,
+    /**
+     * an observed order of convergence (computed) within tolerance of the expected one (reference),
+     * bounded above and below
+     */
+    ORDER
   }
 
   /** A check that computed lies within tolerance of reference. */
@@ -48,6 +53,7 @@ public record Check(
         double e = Math.abs(computed - reference);
         yield relative ? e / Math.abs(reference) : e;
       }
+      case ORDER -> Math.abs(computed - reference);
       case AT_MOST -> Math.max(0, computed - reference);
       case AT_LEAST -> Math.max(0, reference - computed);
     };
@@ -55,10 +61,20 @@ public record Check(
 
   public boolean passed() {
     return switch (mode) {
-      case NEAR -> error() <= tolerance;
+      case NEAR, ORDER -> error() <= tolerance;
       case AT_MOST -> computed <= reference;
       case AT_LEAST -> computed >= reference;
     };
+  }
+
+  /**
+   * An observed order of convergence held against the expected one: it passes within expected ±
+   * band, so an order too high (a reference that is not what it seems, a norm computed wrongly)
+   * fails as well as one too low.
+   */
+  public static Check order(
+      String caseName, String source, double expected, double observed, double band) {
+    return new Check(caseName, source, expected, observed, band, false, Mode.ORDER);
   }
 
   /** A check that the computed value is at most the bound. */

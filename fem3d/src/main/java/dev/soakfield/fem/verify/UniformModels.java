@@ -17,18 +17,26 @@ import java.util.Map;
 final class UniformModels {
   private UniformModels() {}
 
-  /** A constant condition on a face group. */
-  record Condition(FaceKind kind, double value, double coefficient) {
+  /** A condition on a face group: its kind, its value and coefficient as functions of time. */
+  record Condition(FaceKind kind, TimeFunction value, TimeFunction coefficient) {
     static Condition concentration(double c) {
-      return new Condition(FaceKind.CONCENTRATION, c, 0);
+      return concentration(TimeFunction.constant(c));
+    }
+
+    static Condition concentration(TimeFunction c) {
+      return new Condition(FaceKind.CONCENTRATION, c, TimeFunction.constant(0));
     }
 
     static Condition flux(double q) {
-      return new Condition(FaceKind.FLUX, q, 0);
+      return new Condition(FaceKind.FLUX, TimeFunction.constant(q), TimeFunction.constant(0));
     }
 
     static Condition exchange(double h, double cEnv) {
-      return new Condition(FaceKind.EXCHANGE, cEnv, h);
+      return exchange(h, TimeFunction.constant(cEnv));
+    }
+
+    static Condition exchange(double h, TimeFunction cEnv) {
+      return new Condition(FaceKind.EXCHANGE, cEnv, TimeFunction.constant(h));
     }
   }
 
@@ -66,14 +74,7 @@ final class UniformModels {
       }
       Condition c = e.getValue();
       faces.add(
-          new FaceCondition(
-              g,
-              e.getKey(),
-              c.kind(),
-              TimeFunction.constant(c.value()),
-              TimeFunction.constant(c.coefficient()),
-              members,
-              faceS));
+          new FaceCondition(g, e.getKey(), c.kind(), c.value(), c.coefficient(), members, faceS));
     }
     double[] phi0 = new double[mesh.nodeCount()];
     for (int t = 0; t < tets; t++) {
@@ -82,6 +83,65 @@ final class UniformModels {
       }
     }
     return new DiffusionModel(FeSpace.of(mesh), sol, tensor, rate, new double[tets], faces, phi0);
+  }
+
+  /** The same model with a constant source (amount per m³ per s) in each volume group. */
+  static DiffusionModel withConstantSource(DiffusionModel m, double[] perGroup) {
+    var mesh = m.space().mesh();
+    double[] r = new double[mesh.tetCount()];
+    for (int t = 0; t < r.length; t++) {
+      r[t] = perGroup[mesh.tetGroup(t)];
+    }
+    return new DiffusionModel(
+        m.space(),
+        m.solubility(),
+        m.conductance(),
+        m.firstOrderRate(),
+        r,
+        m.faces(),
+        m.initialPhi());
+  }
+
+  /** The same model with conductance D·S given per tetrahedron (6 numbers each). */
+  static DiffusionModel withConductance(DiffusionModel m, double[] conductance) {
+    return new DiffusionModel(
+        m.space(),
+        m.solubility(),
+        conductance,
+        m.firstOrderRate(),
+        m.constantRate(),
+        m.faces(),
+        m.initialPhi());
+  }
+
+  /** The same model starting from the potential {@code phi0} (one value per node). */
+  static DiffusionModel startingFrom(DiffusionModel m, double[] phi0) {
+    return new DiffusionModel(
+        m.space(),
+        m.solubility(),
+        m.conductance(),
+        m.firstOrderRate(),
+        m.constantRate(),
+        m.faces(),
+        phi0);
+  }
+
+  /** The exact field at every node of the mesh. */
+  static double[] atNodes(TetMesh mesh, ExactField f) {
+    double[] u = new double[mesh.nodeCount()];
+    for (int v = 0; v < u.length; v++) {
+      u[v] = f.value(mesh.coord(v, 0), mesh.coord(v, 1), mesh.coord(v, 2));
+    }
+    return u;
+  }
+
+  /** Every face group of the mesh held at c. */
+  static Map<String, Condition> allHeld(TetMesh mesh, double c) {
+    Map<String, Condition> m = new java.util.LinkedHashMap<>();
+    for (var g : mesh.faceGroups()) {
+      m.put(g.name(), Condition.concentration(c));
+    }
+    return m;
   }
 
   static double[] filled(int n, double v) {

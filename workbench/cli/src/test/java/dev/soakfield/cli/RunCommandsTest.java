@@ -56,5 +56,16 @@ class RunCommandsTest {
     assertEquals(0, r.exitCode(), r.out());
     assertTrue(r.out().contains("Crank (1975)"), r.out());
     assertTrue(r.out().contains(" 0 failed"), r.out());
+    // the observed orders beside the expected ones: sphere and finite cylinder, linear and
+    // quadratic, L² and H¹
+    assertTrue(r.out().contains("observed  expected  allowed"), r.out());
+    // quadratic, L² and H¹: 8 orders, each a row of the table and a line of the orders' list
+    assertEquals(
+        16,
+        r.out()
+            .lines()
+            .filter(l -> l.contains("jittered, L2 order") || l.contains("jittered, H1 order"))
+            .count(),
+        r.out());
   }
 }

@@ -5,12 +5,17 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
+import dev.soakfield.app.OrbitCamera;
 import dev.soakfield.app.SoakedBox;
+import dev.soakfield.fem.results.StoredRun;
+import dev.soakfield.render.FieldAtPoint;
 import dev.soakfield.render.GlAvailable;
 import dev.soakfield.render.GlRuntime;
 import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -18,8 +23,24 @@ import org.junit.jupiter.api.io.TempDir;
 class RenderCommandTest {
   @TempDir Path dir;
 
+  /** The colour limits the command printed: "colour limits LOW .. HIGH". */
+  private static double[] limits(String out) {
+    Matcher m = Pattern.compile("colour limits (\\S+) \\.\\. (\\S+)").matcher(out);
+    assertTrue(m.find(), out);
+    return new double[] {Double.parseDouble(m.group(1)), Double.parseDouble(m.group(2))};
+  }
+
+  /** The picture's camera, as the command sets it up for the box of {@link SoakedBox}. */
+  private static OrbitCamera camera(OrbitCamera.View view, int w, int h) {
+    OrbitCamera cam = new OrbitCamera();
+    cam.look(view);
+    cam.viewport(w, h);
+    cam.fit(new double[] {0, 0, 0, 0.01, 0.01, 0.004});
+    return cam;
+  }
+
   @Test
-  void rendersAResultFolderToAPngOfTheAskedSize() throws Exception {
+  void rendersAResultFolderToAPngThatShowsTheFieldOnTheCut() throws Exception {
     GlAvailable.orSkip();
     Path results = SoakedBox.make(dir);
     Path pic = dir.resolve("pic.png");
@@ -32,7 +53,7 @@ class RenderCommandTest {
             "--field",
             "c",
             "--view",
-            "xmin",
+            "zmax",
             "--section",
             "z:2mm",
             "--iso",
@@ -47,6 +68,26 @@ class RenderCommandTest {
     BufferedImage img = ImageIO.read(pic.toFile());
     assertEquals(320, img.getWidth());
     assertEquals(240, img.getHeight());
+    // seen from above, the cut z = 2 mm faces the viewer square on (unshaded): each pixel on it
+    // shows the stored c there through the ramp and the printed limits (±3 of 256 entries). The
+    // isosurface c = 0.5 (near x = 1.2 mm) is seen edge on; points away from it are sampled.
+    double[] lim = limits(r.out());
+    StoredRun run = StoredRun.open(results);
+    double[] c = run.field(1, "c");
+    OrbitCamera cam = camera(OrbitCamera.View.ZMAX, 320, 240);
+    // (the colour bar and its backing cover x > 6 mm at this size)
+    for (double x : new double[] {0.0003, 0.0006, 0.002, 0.003, 0.004, 0.005}) {
+      double[] px = cam.toPixel(x, 0.005, 0.002);
+      double[] seen =
+          FieldAtPoint.seenAt(cam, (int) px[0], (int) px[1], new double[] {0, 0, 1}, 0.002);
+      double expected = FieldAtPoint.value(run.mesh(), c, seen[0], seen[1], seen[2]);
+      int shown = FieldAtPoint.entryOf(img.getRGB((int) px[0], (int) px[1]), 1.0);
+      assertEquals(
+          FieldAtPoint.rampEntry(expected, lim[0], lim[1]),
+          shown,
+          3,
+          "x = " + x + ", c = " + expected);
+    }
   }
 
   @Test
@@ -67,26 +108,30 @@ class RenderCommandTest {
     assertEquals(0, r.exitCode(), r.err());
     BufferedImage img = ImageIO.read(pic.toFile());
     // the default (iso) view looks from -y: the half y < 5 mm must go, showing the cut at y = 5 mm
-    dev.soakfield.app.OrbitCamera cam = new dev.soakfield.app.OrbitCamera();
-    cam.look(dev.soakfield.app.OrbitCamera.View.ISO);
-    cam.viewport(400, 300);
-    cam.fit(new double[] {0, 0, 0, 0.01, 0.01, 0.004});
+    OrbitCamera cam = camera(OrbitCamera.View.ISO, 400, 300);
     double[] skin = cam.toPixel(0.0075, 0.0, 0.001); // the ymin skin, now taken away
-    double[] cut = cam.toPixel(0.0075, 0.005, 0.002); // the middle of the cut
     int background = dev.soakfield.render.SceneRenderer.BACKGROUND;
     assertEquals(background, img.getRGB((int) skin[0], (int) skin[1]) & 0xffffff);
-    // on the cut, the field's colour at x = 7.5 mm: c rises towards the held xmin face, so the
-    // cut there is darker than at x = 2.5 mm on the ramp (ColourMap: dark at low values)
-    double[] nearHeld = cam.toPixel(0.0025, 0.005, 0.002);
-    int far = img.getRGB((int) cut[0], (int) cut[1]) & 0xffffff;
-    int near = img.getRGB((int) nearHeld[0], (int) nearHeld[1]) & 0xffffff;
-    assertTrue(far != background && near != background);
-    assertTrue(
-        luma(far) < luma(near), Integer.toHexString(far) + " vs " + Integer.toHexString(near));
-  }
-
-  private static double luma(int rgb) {
-    return 0.3 * ((rgb >> 16) & 0xff) + 0.59 * ((rgb >> 8) & 0xff) + 0.11 * (rgb & 0xff);
+    // on the cut, the stored c of the last frame through the ramp, darkened by the renderer's
+    // shading of a face at an angle: k = 0.55 + 0.45·|n·l|, n the cut's normal (0, 1, 0), l the
+    // direction towards the eye (SceneRenderer's surface shader)
+    double k = 0.55 + 0.45 * Math.abs(cam.towardsEye().y);
+    double[] lim = limits(r.out());
+    StoredRun run = StoredRun.open(results);
+    double[] c = run.field(run.frameCount() - 1, "c");
+    for (double x : new double[] {0.0015, 0.0025, 0.005, 0.0075}) {
+      double[] px = cam.toPixel(x, 0.005, 0.002);
+      double[] seen =
+          FieldAtPoint.seenAt(cam, (int) px[0], (int) px[1], new double[] {0, 1, 0}, 0.005);
+      double expected = FieldAtPoint.value(run.mesh(), c, seen[0], seen[1], seen[2]);
+      int rgb = img.getRGB((int) px[0], (int) px[1]) & 0xffffff;
+      assertTrue(rgb != background, "x = " + x);
+      assertEquals(
+          FieldAtPoint.rampEntry(expected, lim[0], lim[1]),
+          FieldAtPoint.entryOf(rgb, k),
+          4,
+          "x = " + x + ", c = " + expected + ", shading " + k);
+    }
   }
 
   @Test

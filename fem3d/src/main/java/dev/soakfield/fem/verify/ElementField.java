@@ -1,0 +1,98 @@
+package dev.soakfield.fem.verify;
+
+import dev.soakfield.fem.element.TetBasis;
+import dev.soakfield.mesh.TetMesh;
+
+/**
+ * A finite-element field evaluated inside one tetrahedron at a time, isoparametrically: position,
+ * value and gradient at barycentric coordinates, with the Jacobian of the element's own (possibly
+ * curved) map. Written for the verification cases from the shape functions alone, so that error
+ * norms and face fluxes do not reuse the assembly they check. One instance per thread.
+ */
+final class ElementField {
+  private final TetMesh mesh;
+  private final int order;
+  private final int per;
+  private final double[] n;
+  private final double[] dn;
+  private final double[] jac = new double[9];
+  private final double[] inv = new double[9];
+  private final double[] x = new double[3];
+  private final double[] grad = new double[3];
+  private double value;
+  private double det;
+
+  ElementField(TetMesh mesh) {
+    this.mesh = mesh;
+    this.order = mesh.order();
+    this.per = mesh.nodesPerTet();
+    this.n = new double[per];
+    this.dn = new double[3 * per];
+  }
+
+  /** Evaluates field {@code u} (one value per node) in tetrahedron {@code tet} at {@code l}. */
+  void at(int tet, double[] l, double[] u) {
+    TetBasis.values(order, l, n);
+    TetBasis.referenceGradients(order, l, dn);
+    double[] j = jac;
+    java.util.Arrays.fill(j, 0.0);
+    x[0] = 0;
+    x[1] = 0;
+    x[2] = 0;
+    double d0 = 0;
+    double d1 = 0;
+    double d2 = 0;
+    value = 0;
+    for (int i = 0; i < per; i++) {
+      int v = mesh.tetNode(tet, i);
+      for (int r = 0; r < 3; r++) {
+        double c = mesh.coord(v, r);
+        x[r] += n[i] * c;
+        for (int k = 0; k < 3; k++) {
+          j[3 * r + k] += c * dn[3 * i + k];
+        }
+      }
+      value += n[i] * u[v];
+      d0 += u[v] * dn[3 * i];
+      d1 += u[v] * dn[3 * i + 1];
+      d2 += u[v] * dn[3 * i + 2];
+    }
+    double c00 = j[4] * j[8] - j[5] * j[7];
+    double c01 = j[5] * j[6] - j[3] * j[8];
+    double c02 = j[3] * j[7] - j[4] * j[6];
+    det = j[0] * c00 + j[1] * c01 + j[2] * c02;
+    double r = 1 / det;
+    inv[0] = c00 * r;
+    inv[1] = (j[2] * j[7] - j[1] * j[8]) * r;
+    inv[2] = (j[1] * j[5] - j[2] * j[4]) * r;
+    inv[3] = c01 * r;
+    inv[4] = (j[0] * j[8] - j[2] * j[6]) * r;
+    inv[5] = (j[2] * j[3] - j[0] * j[5]) * r;
+    inv[6] = c02 * r;
+    inv[7] = (j[1] * j[6] - j[0] * j[7]) * r;
+    inv[8] = (j[0] * j[4] - j[1] * j[3]) * r;
+    // ∇u = J^-T ∂u/∂ξ
+    grad[0] = inv[0] * d0 + inv[3] * d1 + inv[6] * d2;
+    grad[1] = inv[1] * d0 + inv[4] * d1 + inv[7] * d2;
+    grad[2] = inv[2] * d0 + inv[5] * d1 + inv[8] * d2;
+  }
+
+  /** The position of the last point evaluated (shared; read only). */
+  double[] position() {
+    return x;
+  }
+
+  double value() {
+    return value;
+  }
+
+  /** The gradient of the field at the last point (shared; read only). */
+  double[] gradient() {
+    return grad;
+  }
+
+  /** |det J| at the last point: dV = |det J|·dξ (the reference element has volume 1/6). */
+  double jacobian() {
+    return Math.abs(det);
+  }
+}
