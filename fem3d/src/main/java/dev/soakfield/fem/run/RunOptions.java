@@ -19,6 +19,8 @@ import java.util.Objects;
  * @param completion what is made of the results before the folder says finished (the report and its
  *     pictures), so that "finished" means all of it is there
  * @param frameEncoding how the field frames store their numbers (Float32 fields by default)
+ * @param frames write the field frames (fields.pvd, fields/*.vtu); a sweep's cases keep only their
+ *     series and summary, so they skip them
  */
 public record RunOptions(
     boolean force,
@@ -29,7 +31,8 @@ public record RunOptions(
     double checkpointSeconds,
     boolean resume,
     ResultFolder.Completion completion,
-    VtuEncoding frameEncoding) {
+    VtuEncoding frameEncoding,
+    boolean frames) {
   /** Checkpoints by default: every 500 steps or 60 s of wall time, whichever comes first. */
   public static final int DEFAULT_CHECKPOINT_STEPS = 500;
 
@@ -56,7 +59,8 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with {@code resume}. */
@@ -70,13 +74,23 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with checkpoint intervals. */
   public RunOptions withCheckpoints(int steps, double seconds) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, steps, seconds, resume, completion, frameEncoding);
+        force,
+        toolVersion,
+        maxHeap,
+        laws,
+        steps,
+        seconds,
+        resume,
+        completion,
+        frameEncoding,
+        frames);
   }
 
   /** No force, this JVM's heap, the version of the fem3d package (or "development build"). */
@@ -91,7 +105,8 @@ public record RunOptions(
         DEFAULT_CHECKPOINT_SECONDS,
         false,
         ResultFolder.Completion.NONE,
-        VtuEncoding.DEFAULT);
+        VtuEncoding.DEFAULT,
+        true);
   }
 
   /** These options with {@code force}. */
@@ -105,7 +120,8 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with {@code version}. */
@@ -119,7 +135,8 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with {@code completion} run before the folder says finished. */
@@ -133,7 +150,8 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with {@code maxHeap}. */
@@ -147,7 +165,8 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with the frames stored as {@code encoding} says (precision, compression). */
@@ -161,6 +180,22 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        encoding);
+        encoding,
+        frames);
+  }
+
+  /** These options with field frames written or not ({@code false}: series and summary only). */
+  public RunOptions withFrames(boolean frames) {
+    return new RunOptions(
+        force,
+        toolVersion,
+        maxHeap,
+        laws,
+        checkpointSteps,
+        checkpointSeconds,
+        resume,
+        completion,
+        frameEncoding,
+        frames);
   }
 }
