@@ -74,6 +74,7 @@ public final class ExitCodes {
         || ex instanceof UserInputException
         || ex instanceof FitInputException
         || ex instanceof CaseInputException
+        || ex instanceof dev.soakfield.fem.sweep.SweepInputException
         || ex instanceof PluginLoadException
         || ex instanceof ResultFolderException
         || ex instanceof HeapTooSmallException) {
