@@ -47,7 +47,7 @@ public final class SweepPlots {
           continue;
         }
         Path png = folder.resolve(fileName(output + "-vs-" + key));
-        scatter(png, output + " against " + key, key, output, x, y);
+        scatter(png, output + " against " + key, key, titled(output), x, y, groups(table, done));
         written.add(png);
       }
     }
@@ -77,27 +77,83 @@ public final class SweepPlots {
     return v;
   }
 
+  /**
+   * Each case's group: the values of the keys varied by text (a soak condition "85 degC"), so that
+   * points of one level share a colour; one group when every key is a number.
+   */
+  static List<String> groups(CasesTable table, List<CaseRow> rows) {
+    List<Integer> textKeys = new ArrayList<>();
+    for (int k = 0; k < table.keys().size(); k++) {
+      if (numbers(rows, k).length == 0 && !rows.isEmpty()) {
+        textKeys.add(k);
+      }
+    }
+    List<String> g = new ArrayList<>();
+    for (CaseRow r : rows) {
+      StringBuilder sb = new StringBuilder();
+      for (int k : textKeys) {
+        String v = r.values().get(k);
+        sb.append(sb.length() > 0 ? ", " : "")
+            .append(table.keys().get(k))
+            .append(" = ")
+            .append(v.startsWith("\"") && v.endsWith("\"") ? v.substring(1, v.length() - 1) : v);
+      }
+      g.add(sb.length() == 0 ? "cases" : sb.toString());
+    }
+    return g;
+  }
+
+  /** An axis title with the unit the sweep knows for sure: seconds for threshold times. */
+  static String titled(String column) {
+    return column.startsWith("threshold:") ? column + " [s]" : column;
+  }
+
+  /** Plain decimals for ordinary magnitudes, powers of ten for very small or large ones. */
+  static String pattern(List<Double> values) {
+    double max = 0;
+    for (double v : values) {
+      max = Math.max(max, Math.abs(v));
+    }
+    return max != 0 && (max < 1e-2 || max >= 1e5) ? "0.###E0" : "0.####";
+  }
+
   /** A file name from a column name: letters, digits, dot, dash and underscore. */
   static String fileName(String name) {
     return name.replaceAll("[^A-Za-z0-9._-]+", "_") + ".png";
   }
 
   private static void scatter(
-      Path png, String title, String xTitle, String yTitle, double[] x, double[] y)
+      Path png,
+      String title,
+      String xTitle,
+      String yTitle,
+      double[] x,
+      double[] y,
+      List<String> groups)
       throws IOException {
-    List<Double> xs = new ArrayList<>();
-    List<Double> ys = new ArrayList<>();
+    XYChart chart = chart(title, xTitle, yTitle);
+    java.util.Map<String, List<List<Double>>> byGroup = new java.util.LinkedHashMap<>();
+    List<Double> allX = new ArrayList<>();
+    List<Double> allY = new ArrayList<>();
     for (int i = 0; i < x.length; i++) {
       if (Double.isFinite(y[i])) {
-        xs.add(x[i]);
-        ys.add(y[i]);
+        List<List<Double>> xy =
+            byGroup.computeIfAbsent(
+                groups.get(i), g -> List.of(new ArrayList<>(), new ArrayList<>()));
+        xy.get(0).add(x[i]);
+        xy.get(1).add(y[i]);
+        allX.add(x[i]);
+        allY.add(y[i]);
       }
     }
-    XYChart chart = chart(title, xTitle, yTitle);
-    chart.getStyler().setLegendVisible(false);
-    XYSeries s = chart.addSeries("cases", xs, ys);
-    s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-    s.setMarker(SeriesMarkers.CIRCLE);
+    chart.getStyler().setLegendVisible(byGroup.size() > 1);
+    chart.getStyler().setXAxisDecimalPattern(pattern(allX));
+    chart.getStyler().setYAxisDecimalPattern(pattern(allY));
+    for (var e : byGroup.entrySet()) {
+      XYSeries s = chart.addSeries(e.getKey(), e.getValue().get(0), e.getValue().get(1));
+      s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+      s.setMarker(SeriesMarkers.CIRCLE);
+    }
     save(png, chart);
   }
 
@@ -118,7 +174,8 @@ public final class SweepPlots {
             "time [h]",
             "fraction of cases crossed by then");
     chart.getStyler().setLegendVisible(false);
-    chart.getStyler().setYAxisMin(0.0).setYAxisMax(1.0);
+    chart.getStyler().setYAxisMin(0.0).setYAxisMax(1.0).setYAxisDecimalPattern("0.00");
+    chart.getStyler().setXAxisDecimalPattern(pattern(xs));
     XYSeries s = chart.addSeries("cases", xs, ys);
     s.setMarker(SeriesMarkers.NONE);
     save(png, chart);

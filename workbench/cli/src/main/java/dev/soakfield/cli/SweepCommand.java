@@ -161,19 +161,31 @@ final class SweepCommand implements Callable<Integer> {
       out.println("also written: " + p);
     }
     for (SweepStatistics.Column c : o.statistics().columns()) {
-      if (c.name().startsWith("threshold:") || c.name().startsWith("max:")) {
-        out.printf(
-            Locale.ROOT,
-            "  %-28s %d cases: min %.4g, 5%% %.4g, median %.4g, 95%% %.4g, max %.4g%s%n",
-            c.name(),
-            c.cases(),
-            c.min(),
-            c.p5(),
-            c.p50(),
-            c.p95(),
-            c.max(),
-            c.missing() > 0 ? " (" + c.missing() + " without a value: never crossed)" : "");
+      boolean time = c.name().startsWith("threshold:");
+      if (!time && !c.name().startsWith("max:")) {
+        continue;
       }
+      if (c.cases() == 0) {
+        out.printf(Locale.ROOT, "  %-28s no case has a value (never crossed)%n", c.name());
+        continue;
+      }
+      String unit = time ? " s" : "";
+      out.printf(
+          Locale.ROOT,
+          "  %-28s %d cases: min %.4g%s, 5%% %.4g%s, median %.4g%s, 95%% %.4g%s, max %.4g%s%s%n",
+          c.name(),
+          c.cases(),
+          c.min(),
+          unit,
+          c.p5(),
+          unit,
+          c.p50(),
+          unit,
+          c.p95(),
+          unit,
+          c.max(),
+          unit,
+          c.missing() > 0 ? " (" + c.missing() + " cases without a value: never crossed)" : "");
     }
     out.println(
         "caution: model estimates from the data and distributions given; percentiles of a sweep"

@@ -146,6 +146,11 @@ public final class SparkSweepEngine implements SweepEngine {
               + " under spark-submit");
     }
     conf.setIfMissing("spark.app.name", "soakfield sweep");
+    if (conf.get("spark.master").startsWith("local")) {
+      // everything runs on this machine: listen on the loopback only
+      conf.setIfMissing("spark.driver.bindAddress", "127.0.0.1");
+      conf.setIfMissing("spark.driver.host", "127.0.0.1");
+    }
     conf.setIfMissing("spark.ui.enabled", "false");
     conf.setIfMissing("spark.sql.shuffle.partitions", "2");
     ownSession = true;
