@@ -153,4 +153,15 @@ class SweepCommandTest {
             "--no-plots");
     assertEquals(0, r.exitCode(), r.err() + r.out());
   }
+
+  @Test
+  void benchSweepPrintsCasesPerMinuteAndTheRatio() {
+    CliRun r = CliRun.of("bench", "sweep", "--cases", "2");
+    assertEquals(0, r.exitCode(), r.err());
+    assertTrue(r.out().contains("one after another (local engine, 1 worker)"), r.out());
+    assertTrue(
+        r.out().matches("(?s).*local engine, \\d+ workers +[0-9.]+ cases/min +[0-9.]+x.*"),
+        r.out());
+    assertEquals(2, CliRun.of("bench", "sweep", "--cases", "1").exitCode());
+  }
 }
