@@ -82,7 +82,8 @@ public final class ExitCodes {
     }
     if (ex instanceof RunFailedException
         || ex instanceof SolverStalledException
-        || ex instanceof SourceLawException) {
+        || ex instanceof SourceLawException
+        || ex instanceof dev.soakfield.fem.sweep.SweepEngineException) {
       return NUMERICAL_FAILURE;
     }
     if (ex instanceof java.io.IOException

@@ -5,6 +5,7 @@ import dev.soakfield.fem.sweep.CasesTable;
 import dev.soakfield.fem.sweep.EngineSettings;
 import dev.soakfield.fem.sweep.PlannedCase;
 import dev.soakfield.fem.sweep.SweepEngine;
+import dev.soakfield.fem.sweep.SweepEngineException;
 import dev.soakfield.fem.sweep.SweepInputException;
 import dev.soakfield.fem.sweep.SweepJob;
 import java.io.IOException;
@@ -70,7 +71,19 @@ public final class SparkSweepEngine implements SweepEngine {
                   + slices
                   + " tasks");
       RDD<PlannedCase> rdd = new JavaSparkContext(sc).parallelize(cases, slices).rdd();
-      sc.runJob(rdd, new PartitionTask(job, files), new RowHandler(sink), listTag());
+      try {
+        sc.runJob(rdd, new PartitionTask(job, files), new RowHandler(sink), listTag());
+      } catch (java.io.UncheckedIOException e) {
+        throw e; // storing a row failed: a file-system problem on this side
+      } catch (Exception e) { // SparkException, which Scala throws without declaring it
+        throw new SweepEngineException(
+            "the Spark job failed ("
+                + e.getMessage().lines().findFirst().orElse("no reason given")
+                + "); the cases that finished are stored in "
+                + settings.outDir()
+                + ": run the same command again to run the rest",
+            e);
+      }
     } finally {
       deleteTree(staging);
     }
@@ -153,8 +166,22 @@ public final class SparkSweepEngine implements SweepEngine {
     }
     conf.setIfMissing("spark.ui.enabled", "false");
     conf.setIfMissing("spark.sql.shuffle.partitions", "2");
+    try {
+      session = SparkSession.builder().config(conf).getOrCreate();
+    } catch (Exception e) { // Scala throws SparkException without declaring it
+      if (!String.valueOf(e.getMessage()).toLowerCase(java.util.Locale.ROOT).contains("master")) {
+        throw new IllegalStateException("Spark did not start: " + e.getMessage(), e);
+      }
+      throw new SweepInputException(
+          "--master: found '"
+              + conf.get("spark.master")
+              + "', which Spark could not use ("
+              + e.getMessage()
+              + "), expected local[N], local-cluster[W,C,M] or a cluster's URL such as"
+              + " spark://host:7077",
+          e);
+    }
     ownSession = true;
-    session = SparkSession.builder().config(conf).getOrCreate();
     return session;
   }
 

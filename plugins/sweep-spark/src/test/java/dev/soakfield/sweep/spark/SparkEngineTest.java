@@ -129,4 +129,20 @@ class SparkEngineTest {
     assertEquals(3, SparkSweepEngine.slices(3, 8));
     assertEquals(8, SparkSweepEngine.slices(20, 8));
   }
+
+  @Test
+  void aMasterSparkCannotUseOrNoneAtAllIsTheUsersMistake() {
+    String bad =
+        org.junit.jupiter.api.Assertions.assertThrows(
+                dev.soakfield.fem.sweep.SweepInputException.class,
+                () -> run(SweepEngines.named("spark"), "bad", Optional.of("nonsense://here")))
+            .getMessage();
+    assertTrue(bad.startsWith("--master: found 'nonsense://here'"), bad);
+    String none =
+        org.junit.jupiter.api.Assertions.assertThrows(
+                dev.soakfield.fem.sweep.SweepInputException.class,
+                () -> run(SweepEngines.named("spark"), "none", Optional.empty()))
+            .getMessage();
+    assertTrue(none.startsWith("--master: found none"), none);
+  }
 }
