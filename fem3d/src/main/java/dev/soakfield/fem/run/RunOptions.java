@@ -18,6 +18,8 @@ import java.util.Objects;
  * @param completion what is made of the results before the folder says finished (the report and its
  *     pictures), so that "finished" means all of it is there
  * @param frameEncoding how the field frames store their numbers (Float32 fields by default)
+ * @param frames write the field frames (fields.pvd, fields/*.vtu); a sweep's cases keep only their
+ *     series and summary, so they skip them
  */
 public record RunOptions(
     boolean force,
@@ -28,7 +30,8 @@ public record RunOptions(
     double checkpointSeconds,
     boolean resume,
     RunCompletion completion,
-    VtuEncoding frameEncoding) {
+    VtuEncoding frameEncoding,
+    boolean frames) {
   /** Checkpoints by default: every 500 steps or 60 s of wall time, whichever comes first. */
   public static final int DEFAULT_CHECKPOINT_STEPS = 500;
 
@@ -55,7 +58,8 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with {@code resume}. */
@@ -69,13 +73,23 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with checkpoint intervals. */
   public RunOptions withCheckpoints(int steps, double seconds) {
     return new RunOptions(
-        force, toolVersion, maxHeap, laws, steps, seconds, resume, completion, frameEncoding);
+        force,
+        toolVersion,
+        maxHeap,
+        laws,
+        steps,
+        seconds,
+        resume,
+        completion,
+        frameEncoding,
+        frames);
   }
 
   /** No force, this JVM's heap, the version of the fem3d package (or "development build"). */
@@ -90,7 +104,8 @@ public record RunOptions(
         DEFAULT_CHECKPOINT_SECONDS,
         false,
         RunCompletion.NONE,
-        VtuEncoding.DEFAULT);
+        VtuEncoding.DEFAULT,
+        true);
   }
 
   /** These options with {@code force}. */
@@ -104,7 +119,8 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with {@code version}. */
@@ -118,7 +134,8 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with {@code completion} run before the folder says finished. */
@@ -132,7 +149,8 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with {@code maxHeap}. */
@@ -146,7 +164,8 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        frameEncoding);
+        frameEncoding,
+        frames);
   }
 
   /** These options with the frames stored as {@code encoding} says (precision, compression). */
@@ -160,6 +179,22 @@ public record RunOptions(
         checkpointSeconds,
         resume,
         completion,
-        encoding);
+        encoding,
+        frames);
+  }
+
+  /** These options with field frames written or not ({@code false}: series and summary only). */
+  public RunOptions withFrames(boolean frames) {
+    return new RunOptions(
+        force,
+        toolVersion,
+        maxHeap,
+        laws,
+        checkpointSteps,
+        checkpointSeconds,
+        resume,
+        completion,
+        frameEncoding,
+        frames);
   }
 }

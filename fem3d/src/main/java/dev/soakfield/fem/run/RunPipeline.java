@@ -63,7 +63,14 @@ public final class RunPipeline {
   /** Reads the case and its mesh and checks them against each other, solving nothing. */
   public static Prepared prepare(Path caseFile) {
     CaseSpec spec = CaseReader.read(caseFile);
-    MeshImport imported = MeshLoader.load(spec.mesh(), AssemblyOptions.defaults());
+    return prepare(spec, MeshLoader.load(spec.mesh(), AssemblyOptions.defaults()));
+  }
+
+  /**
+   * Checks a case against its mesh already imported from {@code spec.mesh()} (a sweep imports the
+   * mesh once for all its cases); the import itself is not changed.
+   */
+  public static Prepared prepare(CaseSpec spec, MeshImport imported) {
     List<String> warnings = new ArrayList<>();
     for (MeshFinding f : imported.report().findings()) {
       if (f.severity() == MeshFinding.Severity.ERROR) {
@@ -235,7 +242,9 @@ public final class RunPipeline {
                 RunProgress.SILENT,
                 warnings,
                 resumeFrom,
-                options.frameEncoding());
+                options.frames()
+                    ? java.util.Optional.of(options.frameEncoding())
+                    : java.util.Optional.empty());
         RunCursor cursor = null;
         if (resumeFrom != null) {
           stepper.restoreLawStates(Checkpointer.lawStates(resumeFrom));

@@ -49,7 +49,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
   private final ProbeWatch probes;
   private final SeriesRows rows;
   private final SeriesWriter series;
-  private final FrameWriter frames;
+  private final Optional<FrameWriter> frames; // empty: a run that keeps no field frames
   private double outputSeconds;
   private final StopRule stop;
   private final double[] partAmounts0;
@@ -74,13 +74,13 @@ final class RunRecorder implements StepListener, AutoCloseable {
       RunProgress progress,
       List<String> warnings)
       throws IOException {
-    this(dir, spec, model, stepper, progress, warnings, null, VtuEncoding.DEFAULT);
+    this(dir, spec, model, stepper, progress, warnings, null, Optional.of(VtuEncoding.DEFAULT));
   }
 
   /**
    * A recorder that goes on from a checkpoint when {@code resume} is given: the series keeps the
    * rows the checkpoint saw, and every accumulated figure comes back from it; frames are stored as
-   * {@code frameEncoding} says.
+   * {@code frameEncoding} says (none when it is empty).
    */
   RunRecorder(
       Path dir,
@@ -90,7 +90,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
       RunProgress progress,
       List<String> warnings,
       StateBundle resume,
-      VtuEncoding frameEncoding)
+      Optional<VtuEncoding> frameEncoding)
       throws IOException {
     this.dir = dir;
     this.spec = spec;
@@ -136,7 +136,10 @@ final class RunRecorder implements StepListener, AutoCloseable {
     balance = new BalanceLedger(mesh.faceGroups().size(), stepper.amount(model.initialPhi(), 0.0));
     partAmounts0 = totalAmounts(model.initialPhi(), 0.0);
     stop = new StopRule(spec, mesh);
-    frames = new FrameWriter(dir, mesh, frameEncoding);
+    frames =
+        frameEncoding.isPresent()
+            ? Optional.of(new FrameWriter(dir, mesh, frameEncoding.get()))
+            : Optional.empty();
     series =
         new SeriesWriter(
             dir.resolve(ResultFiles.SERIES),
@@ -261,7 +264,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     if (lastMaxima != null) {
       b.put("rec.last.maxima", lastMaxima);
     }
-    frames.snapshot(b);
+    frames.ifPresent(f -> f.snapshot(b));
   }
 
   private void restore(StateBundle b) {
@@ -277,7 +280,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     watch.restore(b);
     range.ifPresent(r -> r.restore(b));
     lastMaxima = b.has("rec.last.maxima") ? b.get("rec.last.maxima") : null;
-    frames.restore(b);
+    frames.ifPresent(f -> f.restore(b));
   }
 
   /** Mobile plus trapped amount per part at time t. */
@@ -309,6 +312,9 @@ final class RunRecorder implements StepListener, AutoCloseable {
   }
 
   private void writeFrame(double t, double[] phi) throws IOException {
+    if (frames.isEmpty()) {
+      return;
+    }
     double[] c = new double[phi.length];
     for (int i = 0; i < c.length; i++) {
       c[i] = nodalS[i] * phi[i];
@@ -329,7 +335,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
               "trapped", 1, stepper.trappedField(t), spec.quantities().amount() + "/m^3"));
     }
     long start = System.nanoTime();
-    frames.write(t, f);
+    frames.get().write(t, f);
     outputSeconds += (System.nanoTime() - start) * 1e-9;
   }
 
@@ -339,11 +345,13 @@ final class RunRecorder implements StepListener, AutoCloseable {
   }
 
   void finish(RunTotals totals) throws IOException {
-    double lastFrame = frames.lastTime();
-    if (!Double.isNaN(lastFrame) && lastFrame != totals.endTime()) {
-      writeFrame(totals.endTime(), totals.finalPhi()); // a stop condition ended the run early
+    if (frames.isPresent()) {
+      double lastFrame = frames.get().lastTime();
+      if (!Double.isNaN(lastFrame) && lastFrame != totals.endTime()) {
+        writeFrame(totals.endTime(), totals.finalPhi()); // a stop condition ended the run early
+      }
+      frames.get().finish();
     }
-    frames.finish();
     boolean lumped = spec.time().capacity() == dev.soakfield.fem.casefile.CapacityForm.LUMPED;
     range.flatMap(r -> r.warning(lumped)).ifPresent(warnings::add);
     StateFile.write(

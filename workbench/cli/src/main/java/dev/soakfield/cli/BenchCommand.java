@@ -14,7 +14,8 @@ import picocli.CommandLine.Spec;
       SolverBenchCommand.class,
       RunBenchCommand.class,
       RenderBenchCommand.class,
-      OutputBench.class
+      OutputBench.class,
+      SweepBench.class
     })
 final class BenchCommand implements Runnable {
   @Spec CommandSpec spec;

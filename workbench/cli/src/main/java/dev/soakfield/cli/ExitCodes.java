@@ -74,6 +74,7 @@ public final class ExitCodes {
         || ex instanceof UserInputException
         || ex instanceof FitInputException
         || ex instanceof CaseInputException
+        || ex instanceof dev.soakfield.fem.sweep.SweepInputException
         || ex instanceof PluginLoadException
         || ex instanceof ResultFolderException
         || ex instanceof HeapTooSmallException) {
@@ -81,7 +82,8 @@ public final class ExitCodes {
     }
     if (ex instanceof RunFailedException
         || ex instanceof SolverStalledException
-        || ex instanceof SourceLawException) {
+        || ex instanceof SourceLawException
+        || ex instanceof dev.soakfield.fem.sweep.SweepEngineException) {
       return NUMERICAL_FAILURE;
     }
     if (ex instanceof java.io.IOException

@@ -14,6 +14,7 @@ import picocli.CommandLine.Command;
       InfoCommand.class,
       CheckCommand.class,
       RunCommand.class,
+      SweepCommand.class,
       BakeCommand.class,
       ReportCommand.class,
       ExportCommand.class,

@@ -69,7 +69,16 @@ class FitCommandTest {
     assertTrue(covers(j.get("saturation"), 0.0035), j.get("saturation").toString());
     assertEquals(17, j.get("points").size());
     assertTrue(j.get("cautions").size() >= 2);
-    assertEquals(3, j.get("diffusivity").size(), "value, low, high");
+    assertEquals(4, j.get("diffusivity").size(), "value, low, high, standardError");
+    // the 95 % interval is value ± t(0.975, n − 2)·se, Student's t (common practice): 17 points
+    JsonNode d = j.get("diffusivity");
+    double t =
+        new org.apache.commons.math3.distribution.TDistribution(15)
+            .inverseCumulativeProbability(0.975);
+    assertEquals(
+        (d.get("high").asDouble() - d.get("low").asDouble()) / 2 / t,
+        d.get("standardError").asDouble(),
+        1e-9 * d.get("value").asDouble());
   }
 
   @Test

@@ -17,6 +17,8 @@ final class FitJson {
     node.put("value", e.value());
     node.put("low", e.low());
     node.put("high", e.high());
+    // what a sweep's "from-fit" takes as the sd of a normal distribution
+    node.put("standardError", e.standardError());
   }
 
   static void putOptional(ObjectNode tree, String key, OptionalDouble v) {
