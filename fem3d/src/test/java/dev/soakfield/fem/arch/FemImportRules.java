@@ -18,6 +18,7 @@ final class FemImportRules {
     "dev.soakfield.fem.results..",
     "dev.soakfield.fem.run..",
     "dev.soakfield.fem.bake..",
+    "dev.soakfield.fem.tds..",
     "dev.soakfield.fem.bench..",
     "dev.soakfield.fem.laws..",
     "dev.soakfield.fem.verify.."

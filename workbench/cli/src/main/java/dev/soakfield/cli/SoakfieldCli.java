@@ -15,6 +15,7 @@ import picocli.CommandLine.Command;
       CheckCommand.class,
       RunCommand.class,
       BakeCommand.class,
+      TdsCommand.class,
       ReportCommand.class,
       ExportCommand.class,
       DemoCommand.class,
