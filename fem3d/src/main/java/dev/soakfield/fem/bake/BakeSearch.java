@@ -39,17 +39,21 @@ public final class BakeSearch {
    * What to bake for.
    *
    * @param target "group" (the part's largest concentration), "mean" (its mean), "probe", "amount"
-   *     (the whole amount) or "weight_gain" (the content in percent of the dry mass, what a balance
-   *     reads against the dry weight)
+   *     or "total" (the whole amount, lattice and trapped), "diffusible" (the lattice amount and
+   *     what reversible traps hold) or "weight_gain" (the content in percent of the dry mass, what
+   *     a balance reads against the dry weight)
    * @param name the part or probe ("" for amount and weight_gain)
    * @param level the value to fall below, in the target's unit ({@link Result#unit()})
    */
   public record Target(String target, String name, double level) {
-    /** As the command line spells it: max:body, mean:body, probe:core, amount, weight_gain. */
+    /**
+     * As the command line spells it: max:body, mean:body, probe:core, amount, total, diffusible,
+     * weight_gain.
+     */
     public String spelling() {
       return switch (target) {
         case "group" -> "max:" + name;
-        case "amount", "weight_gain" -> target;
+        case "amount", "total", "diffusible", "weight_gain" -> target;
         default -> target + ":" + name;
       };
     }

@@ -53,8 +53,8 @@ final class BakeTargets {
                   + " species (water, hydrogen or {\"molar_mass\": ...}) to weigh them");
         }
       }
-      case "amount" -> {
-        // always there
+      case "amount", "total", "diffusible" -> {
+        // always there: without source laws every amount is lattice and diffusible
       }
       default -> throw new IllegalArgumentException("bake target: unknown kind " + t.target());
     }
@@ -75,7 +75,7 @@ final class BakeTargets {
 
   static String unit(CaseSpec spec, BakeSearch.Target t) {
     return switch (t.target()) {
-      case "amount" -> spec.quantities().amount();
+      case "amount", "total", "diffusible" -> spec.quantities().amount();
       case "weight_gain" -> "%";
       default -> spec.quantities().concentration();
     };
@@ -87,7 +87,9 @@ final class BakeTargets {
     return switch (t.target()) {
       case "group" -> s.require("max:" + t.name());
       case "probe" -> s.require("probe:" + t.name());
-      case "amount" -> s.require("amount");
+      case "amount", "total" -> s.require("amount");
+      case "diffusible" ->
+          s.has("diffusible_amount") ? s.require("diffusible_amount") : s.require("amount");
       case "mean" -> {
         MaterialSpec m = spec.materials().get(t.name());
         double f = spec.quantities().perPart(m.density().orElse(Double.NaN));

@@ -30,6 +30,7 @@ final class CaseBinder {
           "probes",
           "threshold",
           "thresholds",
+          "permeation",
           "species",
           "units");
 
@@ -151,7 +152,13 @@ final class CaseBinder {
       thresholds =
           new ThresholdBinder(fields).bind(thresholdsNode.get(), materials.get(), probes.get());
     }
+    OptionalDouble share = OptionalDouble.of(CaseSpec.DEFAULT_BREAKTHROUGH_SHARE);
+    Optional<CaseNode> permeation = CaseFields.optional(obj, "permeation");
+    if (permeation.isPresent()) {
+      share = breakthroughShare(permeation.get());
+    }
     if (mesh.isEmpty()
+        || share.isEmpty()
         || quantities.isEmpty()
         || thresholds.isEmpty()
         || law.isEmpty()
@@ -182,7 +189,30 @@ final class CaseBinder {
             temperature,
             exposure.get(),
             quantities.get(),
-            thresholds.get()));
+            thresholds.get(),
+            share.getAsDouble()));
+  }
+
+  /** {"breakthrough_share": s}: the share of the steady flux that marks breakthrough, 0 < s < 1. */
+  private OptionalDouble breakthroughShare(CaseNode node) {
+    String expected = "a share of the steady flux between 0 and 1 (e.g. 0.1)";
+    Optional<CaseNode.Obj> obj =
+        fields.object(node, "permeation", "an object with breakthrough_share");
+    if (obj.isEmpty()) {
+      return OptionalDouble.empty();
+    }
+    fields.onlyKeys(obj.get(), "permeation", Set.of("breakthrough_share"));
+    Optional<CaseNode> v = CaseFields.optional(obj.get(), "breakthrough_share");
+    if (v.isEmpty()) {
+      return OptionalDouble.of(CaseSpec.DEFAULT_BREAKTHROUGH_SHARE);
+    }
+    String path = "permeation.breakthrough_share";
+    OptionalDouble s = fields.positive(v.get(), path, expected);
+    if (s.isPresent() && !(s.getAsDouble() < 1)) {
+      fields.problems().found(v.get(), path, expected);
+      return OptionalDouble.empty();
+    }
+    return s;
   }
 
   private Optional<Path> mesh(CaseNode node) {

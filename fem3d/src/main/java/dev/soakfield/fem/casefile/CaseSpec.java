@@ -32,6 +32,8 @@ import java.util.OptionalDouble;
  * @param exposure the exposure history, when the case gives one
  * @param quantities the declared concentration unit and species
  * @param thresholds the levels whose first crossings the results report
+ * @param breakthroughShare the share of the steady flux whose first arrival is a face group's
+ *     breakthrough time ({@code "permeation": {"breakthrough_share": ...}}, default 0.1)
  */
 public record CaseSpec(
     Path caseFile,
@@ -48,7 +50,11 @@ public record CaseSpec(
     double temperature,
     Optional<ExposureHistory> exposure,
     Quantities quantities,
-    List<ThresholdSpec> thresholds) {
+    List<ThresholdSpec> thresholds,
+    double breakthroughShare) {
+  /** The breakthrough share when the case states none (common practice: 10 %). */
+  public static final double DEFAULT_BREAKTHROUGH_SHARE = 0.1;
+
   public CaseSpec {
     Objects.requireNonNull(caseFile, "caseFile");
     Objects.requireNonNull(mesh, "mesh");
@@ -64,6 +70,45 @@ public record CaseSpec(
     Objects.requireNonNull(exposure, "exposure");
     Objects.requireNonNull(quantities, "quantities");
     thresholds = List.copyOf(thresholds);
+    if (!(breakthroughShare > 0 && breakthroughShare < 1)) {
+      throw new IllegalArgumentException("breakthrough share in (0, 1), got " + breakthroughShare);
+    }
+  }
+
+  /** A case with the default breakthrough share. */
+  public CaseSpec(
+      Path caseFile,
+      Path mesh,
+      ElementChoice elements,
+      Map<String, MaterialSpec> materials,
+      Map<String, FaceSpec> faces,
+      InitialSpec initial,
+      TimeSpec time,
+      List<ProbeSpec> probes,
+      OptionalDouble threshold,
+      Map<String, SourcePlace> places,
+      SorptionLaw law,
+      double temperature,
+      Optional<ExposureHistory> exposure,
+      Quantities quantities,
+      List<ThresholdSpec> thresholds) {
+    this(
+        caseFile,
+        mesh,
+        elements,
+        materials,
+        faces,
+        initial,
+        time,
+        probes,
+        threshold,
+        places,
+        law,
+        temperature,
+        exposure,
+        quantities,
+        thresholds,
+        DEFAULT_BREAKTHROUGH_SHARE);
   }
 
   /** The temperature over time: the exposure's, the constant one, or 20 °C. */
@@ -96,7 +141,29 @@ public record CaseSpec(
         temperature,
         newExposure,
         quantities,
-        thresholds);
+        thresholds,
+        breakthroughShare);
+  }
+
+  /** The same case starting from {@code newInitial} (a TDS ramp from an earlier run's state). */
+  public CaseSpec withInitial(InitialSpec newInitial) {
+    return new CaseSpec(
+        caseFile,
+        mesh,
+        elements,
+        materials,
+        faces,
+        newInitial,
+        time,
+        probes,
+        threshold,
+        places,
+        law,
+        temperature,
+        exposure,
+        quantities,
+        thresholds,
+        breakthroughShare);
   }
 
   /** The same case with its mesh read from another file (a result folder's copy). */
@@ -116,7 +183,8 @@ public record CaseSpec(
         temperature,
         exposure,
         quantities,
-        thresholds);
+        thresholds,
+        breakthroughShare);
   }
 
   /** Where the value at {@code path} stands, or line 0 when the file does not hold the path. */

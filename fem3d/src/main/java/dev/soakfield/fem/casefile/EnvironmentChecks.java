@@ -24,8 +24,8 @@ final class EnvironmentChecks {
               + " \"exposure\" history");
     }
     for (FaceSpec f : spec.faces().values()) {
-      if (!f.ambientValue()) {
-        continue;
+      if (!f.ambientValue() || f.kind() == FaceKind.LAW) {
+        continue; // a face law without a pressure of its own takes the exposure's, if any, else 0
       }
       String path = CasePaths.child(CasePaths.child("faces", f.faceGroup()), "kind");
       if (f.kind() == FaceKind.EXCHANGE) {

@@ -38,7 +38,8 @@ final class FaceBinder {
     String kindPath = CasePaths.child(path, "kind");
     Optional<FaceKind> kind =
         fields
-            .required(obj.get(), path, "kind", "concentration, flux, exchange, ambient or sealed")
+            .required(
+                obj.get(), path, "kind", "concentration, flux, exchange, ambient, sealed or law")
             .flatMap(n -> fields.word(n, kindPath, FaceKind.values(), FaceKind::word));
     if (kind.isEmpty()) {
       fields.onlyKeys(obj.get(), path, Set.of("kind", "value", "coefficient"));
@@ -60,6 +61,7 @@ final class FaceBinder {
             .map(v -> new FaceSpec(group, FaceKind.FLUX, v, TimeTable.constant(0)));
       }
       case EXCHANGE -> exchange(group, obj.get(), path);
+      case LAW -> law(group, obj.get(), path);
       case AMBIENT -> {
         fields.onlyKeys(obj.get(), path, Set.of("kind"));
         yield Optional.of(
@@ -87,6 +89,55 @@ final class FaceBinder {
       return Optional.empty();
     }
     return Optional.of(new FaceSpec(group, FaceKind.EXCHANGE, value.get(), h.get(), ambient));
+  }
+
+  /**
+   * {"kind": "law", "law": id, "pressure": p (Pa, or a table; default: the exposure's), parameter:
+   * value, ...}: parameter values stay as given, checked when the run binds the law.
+   */
+  private Optional<FaceSpec> law(String group, CaseNode.Obj obj, String path) {
+    String lawPath = CasePaths.child(path, "law");
+    Optional<String> id =
+        fields
+            .required(obj, path, "law", "a face law id (soakfield plugins lists them)")
+            .flatMap(n -> fields.text(n, lawPath, "a face law id (soakfield plugins lists them)"));
+    Optional<TimeTable> pressure = Optional.of(TimeTable.constant(0));
+    CaseNode.Member p = obj.members().get("pressure");
+    if (p != null) {
+      pressure =
+          fields.table(
+              p.value(), CasePaths.child(path, "pressure"), 0, "a gas pressure (Pa)", "Pa");
+    }
+    java.util.Map<String, Object> params = new java.util.LinkedHashMap<>();
+    boolean ok = id.isPresent() && pressure.isPresent();
+    for (CaseNode.Member m : obj.members().values()) {
+      if (Set.of("kind", "law", "pressure").contains(m.key())) {
+        continue;
+      }
+      if (m.value() instanceof CaseNode.Num num && Double.isFinite(num.value())) {
+        params.put(m.key(), num.value());
+      } else if (m.value() instanceof CaseNode.Text t) {
+        params.put(m.key(), t.value());
+      } else {
+        fields
+            .problems()
+            .found(m.value(), CasePaths.child(path, m.key()), "a number or a value with a unit");
+        ok = false;
+      }
+    }
+    if (!ok) {
+      return Optional.empty();
+    }
+    SourceSpec.LawSource law =
+        new SourceSpec.LawSource(id.get(), params, path, obj.line(), obj.column());
+    return Optional.of(
+        new FaceSpec(
+            group,
+            FaceKind.LAW,
+            pressure.get(),
+            TimeTable.constant(0),
+            p == null,
+            Optional.of(law)));
   }
 
   private Optional<TimeTable> value(CaseNode.Obj obj, String path, double minimum, String what) {

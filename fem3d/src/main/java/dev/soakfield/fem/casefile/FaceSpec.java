@@ -16,10 +16,25 @@ import java.util.Objects;
  *     {@code "value": "ambient"}), and {@code value} is unused
  */
 public record FaceSpec(
-    String faceGroup, FaceKind kind, TimeTable value, TimeTable coefficient, boolean ambientValue) {
+    String faceGroup,
+    FaceKind kind,
+    TimeTable value,
+    TimeTable coefficient,
+    boolean ambientValue,
+    java.util.Optional<SourceSpec.LawSource> law) {
   /** A face condition with its own value (not the ambient's). */
   public FaceSpec(String faceGroup, FaceKind kind, TimeTable value, TimeTable coefficient) {
     this(faceGroup, kind, value, coefficient, kind == FaceKind.AMBIENT);
+  }
+
+  /** A face condition without a face law. */
+  public FaceSpec(
+      String faceGroup,
+      FaceKind kind,
+      TimeTable value,
+      TimeTable coefficient,
+      boolean ambientValue) {
+    this(faceGroup, kind, value, coefficient, ambientValue, java.util.Optional.empty());
   }
 
   public FaceSpec {
@@ -27,6 +42,10 @@ public record FaceSpec(
     Objects.requireNonNull(kind, "kind");
     Objects.requireNonNull(value, "value");
     Objects.requireNonNull(coefficient, "coefficient");
+    Objects.requireNonNull(law, "law");
+    if (law.isPresent() != (kind == FaceKind.LAW)) {
+      throw new IllegalArgumentException("a face law exactly for the kind law");
+    }
   }
 
   /** A sealed face group: no flux. */

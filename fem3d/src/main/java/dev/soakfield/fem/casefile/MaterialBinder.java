@@ -19,6 +19,10 @@ final class MaterialBinder {
   private static final String ENERGY = "an energy in J/mol (or with a unit: \"42 kJ/mol\")";
   private static final String POSITIVE_D = "a positive number (m²/s)";
   private static final double[][] XYZ = {{1, 0, 0}, {0, 1, 0}, {0, 0, 1}};
+  private static final String LAW_NAME = "name";
+  private static final String REVERSIBLE = "reversible";
+  private static final java.util.regex.Pattern LAW_NAME_SPELLING =
+      java.util.regex.Pattern.compile("[A-Za-z0-9_-]+");
 
   private enum SourceKind {
     NONE("none"),
@@ -94,12 +98,20 @@ final class MaterialBinder {
         CaseFields.optional(obj.get(), "source")
             .map(n -> sources(n, CasePaths.child(path, "source"), laws))
             .orElse(Optional.of(new SourceSpec.NoSource()));
-    if (d.isEmpty() || s.isEmpty() || source.isEmpty() || !densityOk) {
+    Optional<List<SourceSpec.LawSource>> named = named(laws);
+    if (d.isEmpty() || s.isEmpty() || source.isEmpty() || !densityOk || named.isEmpty()) {
       return Optional.empty();
     }
     return Optional.of(
         new MaterialSpec(
-            group, d.get(), s.getAsDouble(), source.get(), dEnergy[0], sEnergy[0], density, laws));
+            group,
+            d.get(),
+            s.getAsDouble(),
+            source.get(),
+            dEnergy[0],
+            sEnergy[0],
+            density,
+            named.get()));
   }
 
   /** A number, or {S0, dH}: the prefactor and the heat of solution into {@code energy[0]}. */
@@ -324,7 +336,11 @@ final class MaterialBinder {
             : new SourceSpec.FirstOrder(rate.getAsDouble()));
   }
 
-  /** {"law": id, name: value, ...}: values stay as given (numbers or unit strings). */
+  /**
+   * {"law": id, "name": ..., "reversible": ..., parameter: value, ...}: parameter values stay as
+   * given (numbers or unit strings); "name" and "reversible" describe the instance and are no
+   * parameters.
+   */
   private Optional<SourceSpec.LawSource> law(CaseNode.Obj obj, String path) {
     String lawPath = CasePaths.child(path, "law");
     Optional<String> id =
@@ -332,8 +348,34 @@ final class MaterialBinder {
             obj.members().get("law").value(), lawPath, "a law id (soakfield plugins lists them)");
     Map<String, Object> params = new LinkedHashMap<>();
     boolean ok = id.isPresent();
+    String name = "";
+    boolean reversible = true;
     for (CaseNode.Member m : obj.members().values()) {
       if (m.key().equals("law")) {
+        continue;
+      }
+      if (m.key().equals(LAW_NAME)) {
+        if (m.value() instanceof CaseNode.Text t
+            && LAW_NAME_SPELLING.matcher(t.value()).matches()) {
+          name = t.value();
+        } else {
+          fields
+              .problems()
+              .found(
+                  m.value(),
+                  CasePaths.child(path, LAW_NAME),
+                  "a name of letters, digits, '-' and '_' (e.g. \"dislocations\")");
+          ok = false;
+        }
+        continue;
+      }
+      if (m.key().equals(REVERSIBLE)) {
+        if (m.value() instanceof CaseNode.Bool b) {
+          reversible = b.value();
+        } else {
+          fields.problems().found(m.value(), CasePaths.child(path, REVERSIBLE), "true or false");
+          ok = false;
+        }
         continue;
       }
       String p = CasePaths.child(path, m.key());
@@ -347,7 +389,46 @@ final class MaterialBinder {
       }
     }
     return ok
-        ? Optional.of(new SourceSpec.LawSource(id.get(), params, path, obj.line(), obj.column()))
+        ? Optional.of(
+            new SourceSpec.LawSource(
+                id.get(), name, reversible, params, path, obj.line(), obj.column()))
         : Optional.empty();
+  }
+
+  /**
+   * Gives every law instance of a material its name: the case's, or the law's id (then "-2", "-3" …
+   * for further unnamed instances of the same law). Two instances with one name are a problem at
+   * the second.
+   */
+  private Optional<List<SourceSpec.LawSource>> named(List<SourceSpec.LawSource> laws) {
+    Set<String> taken = new java.util.HashSet<>();
+    for (SourceSpec.LawSource l : laws) {
+      if (!l.name().isEmpty() && !taken.add(l.name())) {
+        fields
+            .problems()
+            .add(
+                l.line(),
+                l.column(),
+                CasePaths.child(l.path(), LAW_NAME),
+                "found a second source named '"
+                    + l.name()
+                    + "' in this material, expected a name of its own");
+        return Optional.empty();
+      }
+    }
+    List<SourceSpec.LawSource> out = new ArrayList<>();
+    for (SourceSpec.LawSource l : laws) {
+      if (!l.name().isEmpty()) {
+        out.add(l);
+        continue;
+      }
+      String n = l.id();
+      for (int k = 2; taken.contains(n); k++) {
+        n = l.id() + "-" + k;
+      }
+      taken.add(n);
+      out.add(l.named(n));
+    }
+    return Optional.of(out);
   }
 }

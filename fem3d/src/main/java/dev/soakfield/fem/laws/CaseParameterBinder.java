@@ -16,6 +16,13 @@ public final class CaseParameterBinder implements ParameterBinder {
   }
 
   @Override
+  public Binding bind(dev.soakfield.law.api.FaceLawProvider provider, Map<String, Object> given) {
+    LawBinding.Result r = LawBinding.bind(provider, given);
+    return new Binding(
+        r.parameters(), r.problems().stream().map(p -> p.key() + ": " + p.message()).toList());
+  }
+
+  @Override
   public double inUnit(String text, String unit) {
     try {
       return SiValue.parse(text, unit);

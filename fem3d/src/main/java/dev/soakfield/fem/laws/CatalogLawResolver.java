@@ -54,7 +54,42 @@ final class CatalogLawResolver implements LawResolver {
           source.path(),
           "law '" + source.id() + "' rejects these parameters: " + e.getMessage());
     }
-    return new LawUse(entry.id(), entry.describe(), law);
+    return new LawUse(entry.id(), entry.describe(), law, source.name(), source.reversible());
+  }
+
+  @Override
+  public dev.soakfield.fem.model.FaceLawUse resolveFace(
+      String caseName, String group, SourceSpec.LawSource source) {
+    FaceLawEntry entry =
+        catalog
+            .findFace(source.id())
+            .orElseThrow(
+                () ->
+                    problem(
+                        caseName,
+                        source,
+                        source.path() + ".law",
+                        catalog.unknownFaceLawMessage(source.id())));
+    LawBinding.Result bound = LawBinding.bind(entry.provider(), source.parameters());
+    if (!bound.problems().isEmpty()) {
+      List<CaseInputException.Problem> problems = new ArrayList<>();
+      for (LawBinding.Problem p : bound.problems()) {
+        problems.add(
+            new CaseInputException.Problem(
+                source.line(), source.column(), source.path() + "." + p.key(), p.message()));
+      }
+      throw new CaseInputException(caseName, problems);
+    }
+    try {
+      return new dev.soakfield.fem.model.FaceLawUse(
+          entry.id(), entry.describe(), entry.provider().create(bound.parameters().orElseThrow()));
+    } catch (IllegalArgumentException e) {
+      throw problem(
+          caseName,
+          source,
+          source.path(),
+          "face law '" + source.id() + "' rejects these parameters: " + e.getMessage());
+    }
   }
 
   private static CaseInputException problem(

@@ -68,10 +68,20 @@ public final class LawBinding {
    * against {@code provider}'s parameters. The key {@value #LAW_KEY} is ignored.
    */
   public static Result bind(SourceLawProvider provider, Map<String, Object> given) {
+    return bind(provider.id(), provider.parameters(), given);
+  }
+
+  /** As {@link #bind(SourceLawProvider, Map)}, for a face law. */
+  public static Result bind(
+      dev.soakfield.law.api.FaceLawProvider provider, Map<String, Object> given) {
+    return bind(provider.id(), provider.parameters(), given);
+  }
+
+  private static Result bind(String id, List<LawParameter> parameters, Map<String, Object> given) {
     List<Problem> problems = new ArrayList<>();
     Map<String, Double> values = new LinkedHashMap<>();
     Map<String, LawParameter> declared = new LinkedHashMap<>();
-    for (LawParameter p : provider.parameters()) {
+    for (LawParameter p : parameters) {
       declared.put(p.name(), p);
     }
     for (LawParameter p : declared.values()) {
@@ -92,7 +102,7 @@ public final class LawBinding {
         problems.add(
             new Problem(
                 key,
-                "an unknown parameter of law '" + provider.id() + "'",
+                "an unknown parameter of law '" + id + "'",
                 near.map(n -> "'" + n + "' (did you mean it?)")
                     .orElse(
                         declared.isEmpty()
@@ -103,7 +113,7 @@ public final class LawBinding {
     if (!problems.isEmpty()) {
       return new Result(Optional.empty(), problems);
     }
-    return new Result(Optional.of(new CheckedParameters(provider.id(), values)), List.of());
+    return new Result(Optional.of(new CheckedParameters(id, values)), List.of());
   }
 
   private static Optional<Double> number(LawParameter p, Object value, List<Problem> problems) {

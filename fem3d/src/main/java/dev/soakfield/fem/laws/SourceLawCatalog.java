@@ -38,12 +38,17 @@ public final class SourceLawCatalog {
   private static final Pattern ID = Pattern.compile("[a-z0-9]+(-[a-z0-9]+)*");
 
   private final Map<String, LawEntry> byId;
+  private final Map<String, FaceLawEntry> faceById;
   private final List<Path> folders;
   private final List<Path> jarsWithoutLaws;
 
   private SourceLawCatalog(
-      Map<String, LawEntry> byId, List<Path> folders, List<Path> jarsWithoutLaws) {
+      Map<String, LawEntry> byId,
+      Map<String, FaceLawEntry> faceById,
+      List<Path> folders,
+      List<Path> jarsWithoutLaws) {
     this.byId = byId;
+    this.faceById = faceById;
     this.folders = folders;
     this.jarsWithoutLaws = jarsWithoutLaws;
   }
@@ -57,19 +62,22 @@ public final class SourceLawCatalog {
    */
   public static SourceLawCatalog load(List<Path> folders) {
     Map<String, LawEntry> byId = new TreeMap<>();
+    Map<String, FaceLawEntry> faceById = new TreeMap<>();
     ClassLoader parent = SourceLawCatalog.class.getClassLoader();
     loadClassPath(parent, byId);
+    FaceLaws.load(parent, null, LawOrigin.classPath(), faceById);
     List<Path> libraries = new ArrayList<>();
     List<Path> normalized = new ArrayList<>();
     for (Path folder : folders) {
       Path f = folder.toAbsolutePath().normalize();
       if (!normalized.contains(f)) {
         normalized.add(f);
-        loadFolder(f, parent, byId, libraries);
+        loadFolder(f, parent, byId, libraries, faceById);
       }
     }
     return new SourceLawCatalog(
         java.util.Collections.unmodifiableMap(byId),
+        java.util.Collections.unmodifiableMap(faceById),
         List.copyOf(normalized),
         List.copyOf(libraries));
   }
@@ -87,6 +95,29 @@ public final class SourceLawCatalog {
   /** Every law id, ordered. */
   public Set<String> ids() {
     return byId.keySet();
+  }
+
+  /** Every face law, ordered by id. */
+  public List<FaceLawEntry> faceEntries() {
+    return List.copyOf(faceById.values());
+  }
+
+  /** The face law with {@code id}. */
+  public Optional<FaceLawEntry> findFace(String id) {
+    return Optional.ofNullable(faceById.get(id));
+  }
+
+  /** The message for a case that names an unknown face law, with the known ones. */
+  public String unknownFaceLawMessage(String id) {
+    StringBuilder sb = new StringBuilder("found face law '").append(id).append("', expected ");
+    Optional<String> near = NameSuggestion.likely(id, faceById.keySet());
+    near.ifPresent(
+        n -> sb.append("'").append(n).append("' (did you mean it?); the known face laws are "));
+    if (near.isEmpty()) {
+      sb.append("one of ");
+    }
+    return sb.append(faceById.isEmpty() ? "(none)" : String.join(", ", faceById.keySet()))
+        .toString();
   }
 
   /** The law with {@code id}. */
@@ -155,7 +186,11 @@ public final class SourceLawCatalog {
   }
 
   private static void loadFolder(
-      Path folder, ClassLoader parent, Map<String, LawEntry> byId, List<Path> libraries) {
+      Path folder,
+      ClassLoader parent,
+      Map<String, LawEntry> byId,
+      List<Path> libraries,
+      Map<String, FaceLawEntry> faceById) {
     if (!Files.isDirectory(folder)) {
       throw new PluginLoadException(
           "plugins folder "
@@ -171,6 +206,7 @@ public final class SourceLawCatalog {
     URLClassLoader loader =
         new URLClassLoader(
             "soakfield-plugins " + folder, urls(jars), parent); // open for the life of the laws
+    FaceLaws.load(loader, loader, LawOrigin.jar(folder), faceById);
     Map<String, Path> declaredBy = new LinkedHashMap<>();
     for (Path jar : jars) {
       List<String> names = ServiceFile.providerNames(jar);

@@ -14,6 +14,7 @@ public final class FaceCondition {
   private final int[] faces;
   private final double[] faceSolubility;
   private final boolean valueIsPotential;
+  private final java.util.Optional<FaceLawUse> law;
 
   /**
    * A condition on the faces of one group.
@@ -52,6 +53,38 @@ public final class FaceCondition {
       int[] faces,
       double[] faceSolubility,
       boolean valueIsPotential) {
+    this(
+        group,
+        name,
+        kind,
+        value,
+        coefficient,
+        faces,
+        faceSolubility,
+        valueIsPotential,
+        java.util.Optional.empty());
+  }
+
+  /**
+   * A condition with a face law (kind LAW).
+   *
+   * @param value the gas pressure outside in Pa (kind LAW)
+   * @param law the face law acting on the group
+   */
+  public FaceCondition(
+      int group,
+      String name,
+      FaceKind kind,
+      TimeFunction value,
+      TimeFunction coefficient,
+      int[] faces,
+      double[] faceSolubility,
+      boolean valueIsPotential,
+      java.util.Optional<FaceLawUse> law) {
+    this.law = Objects.requireNonNull(law, "law");
+    if (law.isPresent() != (kind == FaceKind.LAW)) {
+      throw new IllegalArgumentException("a face law exactly for the kind law");
+    }
     this.group = group;
     this.name = Objects.requireNonNull(name, "name");
     this.kind = Objects.requireNonNull(kind, "kind");
@@ -59,7 +92,7 @@ public final class FaceCondition {
     this.coefficient = Objects.requireNonNull(coefficient, "coefficient");
     this.faces = faces.clone();
     this.faceSolubility = faceSolubility.clone();
-    this.valueIsPotential = valueIsPotential || kind == FaceKind.AMBIENT;
+    this.valueIsPotential = kind != FaceKind.LAW && (valueIsPotential || kind == FaceKind.AMBIENT);
     if (faceSolubility.length != faces.length) {
       throw new IllegalArgumentException("one solubility per face expected");
     }
@@ -93,6 +126,11 @@ public final class FaceCondition {
   /** The face indices (a copy). */
   public int[] faces() {
     return faces.clone();
+  }
+
+  /** The face law of a LAW condition. */
+  public java.util.Optional<FaceLawUse> law() {
+    return law;
   }
 
   /** Solubility next to each face (a copy). */

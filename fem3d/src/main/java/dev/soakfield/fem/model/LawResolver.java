@@ -16,6 +16,23 @@ public interface LawResolver {
    */
   LawUse resolve(String caseName, String material, SourceSpec.LawSource source);
 
+  /**
+   * The face law a face group's condition names.
+   *
+   * @param group the face group
+   * @throws CaseInputException when the id is unknown or the parameters do not fit
+   */
+  default FaceLawUse resolveFace(String caseName, String group, SourceSpec.LawSource law) {
+    throw new CaseInputException(
+        caseName,
+        java.util.List.of(
+            new CaseInputException.Problem(
+                law.line(),
+                law.column(),
+                law.path(),
+                "found face law '" + law.id() + "', expected no face laws here")));
+  }
+
   /** A resolver for cases without laws: any law is an error. */
   static LawResolver none() {
     return (caseName, material, source) -> {

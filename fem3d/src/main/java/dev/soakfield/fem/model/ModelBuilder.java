@@ -115,6 +115,24 @@ public final class ModelBuilder {
                 + "' touches materials of different solubility; where they meet, the prescribed"
                 + " concentration is applied in the material of smaller solubility");
       }
+      if (f.kind() == FaceKind.LAW) {
+        TimeFunction pressure =
+            f.ambientValue() && spec.exposure().isPresent()
+                ? spec.exposure().get().function(spec.exposure().get()::pressure)
+                : f.value();
+        faces.add(
+            new FaceCondition(
+                g,
+                f.faceGroup(),
+                f.kind(),
+                pressure,
+                f.coefficient(),
+                members,
+                faceS,
+                false,
+                Optional.of(laws.resolveFace(caseName, f.faceGroup(), f.law().orElseThrow()))));
+        continue;
+      }
       TimeFunction value =
           f.ambientValue()
               ? ambient.orElseThrow()

@@ -1,6 +1,9 @@
 package dev.soakfield.fem.physics;
 
-/** The kind of condition on a face group: concentration, flux, exchange, sealed or ambient. */
+/**
+ * The kind of condition on a face group: concentration, flux, exchange, sealed, ambient or a face
+ * law.
+ */
 public enum FaceKind {
   /** Prescribed concentration in the adjacent material (Dirichlet). */
   CONCENTRATION("concentration"),
@@ -14,7 +17,12 @@ public enum FaceKind {
    */
   AMBIENT("ambient"),
   /** No flux. */
-  SEALED("sealed");
+  SEALED("sealed"),
+  /**
+   * The flux a face law gives from the concentration inside, the gas outside and the temperature
+   * (surface kinetics: dissociation and recombination, a charging current); nonlinear Neumann.
+   */
+  LAW("law");
 
   private final String word;
 

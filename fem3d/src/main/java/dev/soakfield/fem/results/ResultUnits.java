@@ -51,6 +51,7 @@ public record ResultUnits(String concentration, String amount) {
           "balance_error",
           "lattice_amount",
           "trapped_amount",
+          "diffusible_amount",
           "trapped:" ->
           amount;
       case "max:", "probe:" -> concentration;

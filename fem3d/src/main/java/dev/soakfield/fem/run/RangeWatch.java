@@ -64,7 +64,7 @@ final class RangeWatch {
       if (f.kind() == FaceKind.SEALED) {
         continue;
       }
-      if (f.kind() == FaceKind.FLUX) {
+      if (f.kind() == FaceKind.FLUX || f.kind() == FaceKind.LAW) {
         return Optional.empty(); // a flux can drive the potential anywhere
       }
       double[] s = f.faceSolubility();

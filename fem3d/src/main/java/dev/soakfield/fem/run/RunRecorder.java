@@ -126,6 +126,8 @@ final class RunRecorder implements StepListener, AutoCloseable {
             mesh,
             spec.probes(),
             stepper.hasSourceLaws(),
+            stepper.trapInstances(),
+            stepper.reversibleTraps(),
             asm.integratePerGroup(nodalOnes, ones),
             partDensity,
             spec.quantities().massPerAmount().orElse(Double.NaN));
@@ -215,7 +217,8 @@ final class RunRecorder implements StepListener, AutoCloseable {
         balance,
         probes.values(phi, shownS),
         temperatureNow,
-        stepper.hasSourceLaws() ? stepper.trappedPerGroup(t) : new double[0]);
+        stepper.hasSourceLaws() ? stepper.trappedPerGroup(t) : new double[0],
+        stepper.trappedPerInstance(t));
   }
 
   private ThresholdWatch.Reading reading(double t, double[] phi) {
@@ -333,6 +336,15 @@ final class RunRecorder implements StepListener, AutoCloseable {
       f.add(
           new VtuWriter.Field(
               "trapped", 1, stepper.trappedField(t), spec.quantities().amount() + "/m^3"));
+      List<String> instances = stepper.trapInstances();
+      for (int k = 0; k < instances.size(); k++) {
+        f.add(
+            new VtuWriter.Field(
+                "trapped:" + instances.get(k),
+                1,
+                stepper.trappedField(k, t),
+                spec.quantities().amount() + "/m^3"));
+      }
     }
     long start = System.nanoTime();
     frames.get().write(t, f);
@@ -354,6 +366,12 @@ final class RunRecorder implements StepListener, AutoCloseable {
     }
     boolean lumped = spec.time().capacity() == dev.soakfield.fem.casefile.CapacityForm.LUMPED;
     range.flatMap(r -> r.warning(lumped)).ifPresent(warnings::add);
+    // the series is complete and closed by now (the run's try-with-resources)
+    java.util.Map<String, Object> permeation =
+        PermeationSummary.of(
+            dev.soakfield.fem.results.Series.read(dir.resolve(ResultFiles.SERIES)),
+            mesh,
+            spec.breakthroughShare());
     StateFile.write(
         dir.resolve(StateFile.NAME),
         new StateFile.State(totals.endTime(), totals.finalPhi(), stepper.lawStates()));
@@ -369,7 +387,8 @@ final class RunRecorder implements StepListener, AutoCloseable {
             stop,
             warnings,
             watch,
-            range.map(RangeWatch::outputs).orElse(List.of())));
+            range.map(RangeWatch::outputs).orElse(List.of()),
+            permeation));
   }
 
   @Override

@@ -10,13 +10,16 @@ import java.util.stream.IntStream;
 /**
  * The columns of series.csv and one row of them per step: time, amounts and maxima per part, inflow
  * per exterior face group, probes, balance error, temperature, then the trapped amounts (with
- * source laws) and the weight gain (with densities). A new column is added here, in both {@link
- * #header()} and {@link #row}.
+ * source laws: per part, then per law instance as {@code trapped:<part>:<name>}, then the
+ * diffusible amount, lattice plus reversibly trapped) and the weight gain (with densities). A new
+ * column is added here, in both {@link #header()} and {@link #row}.
  */
 final class SeriesRows {
   private final TetMesh mesh;
   private final List<ProbeSpec> probes;
   private final boolean sourceLaws;
+  private final List<String> trapInstances;
+  private final boolean[] reversible;
   private final int[] exteriorGroups;
   private final double[] partVolume;
   private final double[] partDensity; // NaN where a material gives none
@@ -27,6 +30,8 @@ final class SeriesRows {
    *
    * @param amounts mobile plus trapped amount per part
    * @param trapped trapped amount per part (empty without source laws)
+   * @param trappedPerInstance trapped amount per source-law instance, in the order of the instances
+   *     the rows were made with
    */
   @SuppressWarnings("ArrayRecordComponent") // one step's figures, handed over and not kept
   record Figures(
@@ -39,12 +44,15 @@ final class SeriesRows {
       BalanceLedger balance,
       double[] probeValues,
       double temperature,
-      double[] trapped) {}
+      double[] trapped,
+      double[] trappedPerInstance) {}
 
   SeriesRows(
       TetMesh mesh,
       List<ProbeSpec> probes,
       boolean sourceLaws,
+      List<String> trapInstances,
+      boolean[] reversible,
       double[] partVolume,
       double[] partDensity,
       double massPerAmount) {
@@ -52,6 +60,8 @@ final class SeriesRows {
     this.massPerAmount = massPerAmount;
     this.probes = probes;
     this.sourceLaws = sourceLaws;
+    this.trapInstances = List.copyOf(trapInstances);
+    this.reversible = reversible.clone();
     this.partVolume = partVolume;
     this.partDensity = partDensity;
     this.exteriorGroups =
@@ -87,6 +97,10 @@ final class SeriesRows {
       for (var g : mesh.volumeGroups()) {
         h.add("trapped:" + g.name());
       }
+      for (String instance : trapInstances) {
+        h.add("trapped:" + instance);
+      }
+      h.add("diffusible_amount");
     }
     if (hasDensities()) {
       h.add("weight_gain_percent");
@@ -132,6 +146,13 @@ final class SeriesRows {
       for (double v : f.trapped()) {
         r.add(v);
       }
+      double diffusible = total - trappedTotal;
+      double[] perInstance = f.trappedPerInstance();
+      for (int k = 0; k < perInstance.length; k++) {
+        r.add(perInstance[k]);
+        diffusible += reversible[k] ? perInstance[k] : 0.0;
+      }
+      r.add(diffusible);
     }
     if (hasDensities()) {
       double[] amounts = f.amounts();

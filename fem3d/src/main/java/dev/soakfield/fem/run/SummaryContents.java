@@ -28,7 +28,8 @@ final class SummaryContents {
       StopRule stop,
       List<String> warnings,
       ThresholdWatch thresholds,
-      List<Map<String, Object>> rangeExcursions) {
+      List<Map<String, Object>> rangeExcursions,
+      Map<String, Object> permeation) {
     TetMesh mesh = model.space().mesh();
     Map<String, Object> root = new LinkedHashMap<>();
     root.put("case", spec.caseFile().toString());
@@ -80,6 +81,8 @@ final class SummaryContents {
     if (!spec.thresholds().isEmpty()) {
       root.put("thresholds", thresholds.summary(spec.quantities().concentration()));
     }
+    // per unit area, SI: the amount unit of the solve (kg or mol) per m² and s; times in s
+    root.put("permeation", permeation);
     root.put("units", spec.quantities().describe());
     if (!rangeExcursions.isEmpty()) {
       root.put("range_excursions", rangeExcursions);

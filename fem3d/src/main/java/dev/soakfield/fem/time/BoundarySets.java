@@ -70,6 +70,9 @@ final class BoundarySets {
         case SEALED -> {
           // nothing enters
         }
+        case LAW -> {
+          // nonlinear: the face laws' own nodal sources (FaceLawSources)
+        }
       }
     }
   }

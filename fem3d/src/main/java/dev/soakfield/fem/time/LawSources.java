@@ -19,7 +19,7 @@ import java.util.Locale;
  * ∂q/∂φ. A law's failure (a throw, NaN or infinity) stops the run with a message naming the law,
  * its origin, the material and the simulated time.
  */
-final class LawSources {
+final class LawSources implements NodalSources {
   /** One law acting in one material. */
   private static final class Part {
     final LawUse use;
@@ -166,7 +166,8 @@ final class LawSources {
    * q(φ) into {@code q} (amount per second per node: Σ weight·π) and ∂q/∂φ into {@code dq}, at the
    * end of a step [t1 − dt, t1] at temperature T1, from the committed states.
    */
-  void evaluate(double[] phi, double t1, double dt, double kelvin, double[] q, double[] dq) {
+  @Override
+  public void evaluate(double[] phi, double t1, double dt, double kelvin, double[] q, double[] dq) {
     java.util.Arrays.fill(q, 0.0);
     java.util.Arrays.fill(dq, 0.0);
     probe.temperature = kelvin;
@@ -270,6 +271,55 @@ final class LawSources {
       if (g >= 0) {
         out[g] += sum;
       }
+    }
+    return out;
+  }
+
+  /** Each law instance as "part:name", in the order of {@link #trappedPerInstance}. */
+  List<String> instanceLabels() {
+    List<String> out = new ArrayList<>();
+    for (Part p : parts) {
+      out.add(p.material + ":" + p.use.name());
+    }
+    return out;
+  }
+
+  /** Whether each law instance's trapped amount counts as diffusible. */
+  boolean[] reversible() {
+    boolean[] out = new boolean[parts.size()];
+    for (int n = 0; n < out.length; n++) {
+      out[n] = parts.get(n).use.reversible();
+    }
+    return out;
+  }
+
+  /** The amount each law instance's committed states hold. */
+  double[] trappedPerInstance(double kelvin) {
+    double[] out = new double[parts.size()];
+    for (int n = 0; n < out.length; n++) {
+      Part p = parts.get(n);
+      probe.state = p.state;
+      double sum = 0;
+      for (int j = 0; j < p.nodes.length; j++) {
+        probe.offset = j * p.stateCount;
+        sum += p.weights[j] * p.use.law().trappedAmount(probe, kelvin);
+      }
+      out[n] = sum;
+    }
+    return out;
+  }
+
+  /**
+   * What one law instance holds per m³ at each node of its material (0 at other nodes): a field of
+   * its own, since an interface node belongs to one instance's material only.
+   */
+  double[] trappedField(int instance, double kelvin) {
+    double[] out = new double[model.space().dofCount()];
+    Part p = parts.get(instance);
+    probe.state = p.state;
+    for (int j = 0; j < p.nodes.length; j++) {
+      probe.offset = j * p.stateCount;
+      out[p.nodes[j]] = p.use.law().trappedAmount(probe, kelvin);
     }
     return out;
   }

@@ -4,13 +4,13 @@ import java.util.Arrays;
 
 /**
  * Newton's method with a backtracking line search on the free rows of R(φ) = A φ − b − dt·q(φ), q
- * the nodal sources of the materials' source laws with their derivative ∂q/∂φ.
+ * the nodal sources of the materials' source laws and of the face laws with their derivative ∂q/∂φ.
  */
 final class SourceNewton {
   private static final int MAX_ITERATIONS = 30;
   private static final double TOLERANCE = 1e-10;
 
-  private final LawSources laws;
+  private final NodalSources laws;
   private final EliminatedSystem system;
   private final boolean[] isPrescribed;
   private final int n;
@@ -19,7 +19,7 @@ final class SourceNewton {
   /** Newton iterations and the linear iterations they took. */
   record Result(int iterations, int linearIterations) {}
 
-  SourceNewton(LawSources laws, EliminatedSystem system, boolean[] isPrescribed) {
+  SourceNewton(NodalSources laws, EliminatedSystem system, boolean[] isPrescribed) {
     this.laws = laws;
     this.system = system;
     this.isPrescribed = isPrescribed;

@@ -33,6 +33,7 @@ public final class ThetaStepper {
   private final BoundarySets boundary;
   private final double[] constantLoad;
   private final LawSources laws;
+  private final FaceLawSources faceLaws;
   private final CoefficientCache coefficients;
   private final EliminatedSystem system;
   private final SourceNewton newton;
@@ -58,7 +59,15 @@ public final class ThetaStepper {
     boundary = new BoundarySets(model, asm);
     system = new EliminatedSystem(model, asm, boundary, solverTolerance, maxIterations);
     laws = new LawSources(model, asm);
-    newton = new SourceNewton(laws, system, boundary.isPrescribed);
+    faceLaws = new FaceLawSources(model, asm, boundary.isPrescribed);
+    NodalSources nodal =
+        faceLaws.isEmpty()
+            ? laws
+            : (phi, t1, dt, kelvin, q, dq) -> {
+              laws.evaluate(phi, t1, dt, kelvin, q, dq);
+              faceLaws.add(phi, t1, kelvin, q, dq);
+            };
+    newton = new SourceNewton(nodal, system, boundary.isPrescribed);
     coefficients = new CoefficientCache(model, asm, boundary, lumped);
     exchangeRows = new ExchangeRows(model, boundary, constantLoad);
     onExchangeFace = exchangeRows.nodeMask();
@@ -110,6 +119,26 @@ public final class ThetaStepper {
   /** Trapped amount per m³ at each node from the committed law states (zeros without laws). */
   public double[] trappedField(double t) {
     return laws.isEmpty() ? new double[n] : laws.trappedField(temperatureAt(t));
+  }
+
+  /** Each source-law instance as "part:name" (empty without laws). */
+  public java.util.List<String> trapInstances() {
+    return laws.instanceLabels();
+  }
+
+  /** Whether each source-law instance's trapped amount counts as diffusible. */
+  public boolean[] reversibleTraps() {
+    return laws.reversible();
+  }
+
+  /** The amount each source-law instance holds in its committed states. */
+  public double[] trappedPerInstance(double t) {
+    return laws.trappedPerInstance(temperatureAt(t));
+  }
+
+  /** What one source-law instance holds per m³ at each node (0 outside its material). */
+  public double[] trappedField(int instance, double t) {
+    return laws.trappedField(instance, temperatureAt(t));
   }
 
   /** Which nodes a concentration or ambient face prescribes (a copy). */
@@ -277,7 +306,7 @@ public final class ThetaStepper {
     double[] q = new double[n];
     int iterations;
     int newtonIterations = 0;
-    if (laws.isEmpty()) {
+    if (laws.isEmpty() && faceLaws.isEmpty()) {
       iterations = system.solve(rhs, phi1);
     } else {
       SourceNewton.Result r = newton.solve(fullRhs, phi1, t1, dt, kelvin, q);
@@ -302,6 +331,7 @@ public final class ThetaStepper {
               * f.area()
               * (theta * f.condition().value().at(t1) + (1 - theta) * f.condition().value().at(t0));
     }
+    double faceAmount = faceLaws.isEmpty() ? 0.0 : faceLaws.addInflow(phi1, t1, dt, kelvin, inflow);
     exchangeRows.addInflow(inflow, c0, c1, new ExchangeRows.Step(t0, t1, dt, theta), phi0, phi1, q);
     double source = dt * sum(constantLoad);
     if (model.hasFirstOrderSource()) {
@@ -314,7 +344,7 @@ public final class ThetaStepper {
       double trappedStart = laws.trappedNow(temperatureAt(t0));
       double trappedEnd = laws.trapped(states, kelvin);
       // net production: what the laws' sources gave the mobile field, less what their states took
-      source += dt * sum(q) + (trappedEnd - trappedStart);
+      source += dt * sum(q) - faceAmount + (trappedEnd - trappedStart);
       amountEnd += trappedEnd;
     }
     return new StepOutcome(

@@ -19,6 +19,7 @@ final class FemImportRules {
     "dev.soakfield.fem.run..",
     "dev.soakfield.fem.bake..",
     "dev.soakfield.fem.sweep..",
+    "dev.soakfield.fem.tds..",
     "dev.soakfield.fem.bench..",
     "dev.soakfield.fem.laws..",
     "dev.soakfield.fem.verify.."

@@ -189,6 +189,10 @@ public final class CaseOverview {
               + table(f.coefficient())
               + " m/s";
       case AMBIENT -> "ambient (the exposure's humidity or gas pressure)";
+      case LAW ->
+          "face law "
+              + f.law().map(l -> l.id()).orElse("?")
+              + (f.ambientValue() ? " (gas: the exposure's)" : " (gas pressure " + value + " Pa)");
     };
   }
 
@@ -243,7 +247,10 @@ public final class CaseOverview {
                   given.add(k + " = " + v);
                 }
               });
-      named.add(l.id() + (given.isEmpty() ? "" : " (" + String.join(", ", given) + ")"));
+      String label =
+          (l.name().equals(l.id()) ? l.id() : "'" + l.name() + "' " + l.id())
+              + (l.reversible() ? "" : " [irreversible]");
+      named.add(label + (given.isEmpty() ? "" : " (" + String.join(", ", given) + ")"));
     }
     return "; source laws " + String.join(" + ", named);
   }

@@ -127,6 +127,8 @@ public final class ReportWriter {
     if (series.isPresent()) {
       curves(doc, series.get(), axis, units);
       WeightGainSection.write(doc, series.get(), axis);
+      TrapSection.write(doc, series.get(), axis, units);
+      PermeationSection.write(doc, summary, series.get(), axis, units);
       groupTables(doc, series.get(), axis, units);
     } else {
       doc.heading("Curves").paragraph("No series.csv in the folder: the run wrote no steps.");

@@ -28,7 +28,9 @@ import picocli.CommandLine.Spec;
     description = {
       "Finds the shortest bake at a temperature that brings a target below a level: a part's"
           + " largest (max:PART) or mean (mean:PART) concentration, a probe (probe:NAME), the whole"
-          + " amount (amount) or the weight gain over the dry mass in percent (weight_gain).",
+          + " amount (amount or total: lattice and trapped), the diffusible amount (diffusible:"
+          + " lattice and reversibly trapped, traps marked \"reversible\": false left out) or the"
+          + " weight gain over the dry mass in percent (weight_gain).",
       "The case gives the part, its materials (Arrhenius data make the temperature matter), its"
           + " faces and where the bake starts (\"initial\", e.g. {\"from\": \"soak-run\"}); the"
           + " oven replaces its exposure. One run brackets the time, bisection narrows it."
@@ -36,9 +38,10 @@ import picocli.CommandLine.Spec;
 final class BakeCommand implements Callable<Integer> {
   private static final Pattern TARGET =
       Pattern.compile(
-          "(?:(max|probe|mean):([^<]+)|(amount|weight_gain))\\s*<\\s*([-+0-9.eE]+)\\s*");
+          "(?:(max|probe|mean):([^<]+)|(amount|total|diffusible|weight_gain))\\s*<\\s*([-+0-9.eE]+)\\s*");
   private static final String SPELLINGS =
-      "max:PART<LEVEL, mean:PART<LEVEL, probe:NAME<LEVEL, amount<LEVEL or weight_gain<PERCENT";
+      "max:PART<LEVEL, mean:PART<LEVEL, probe:NAME<LEVEL, amount<LEVEL, total<LEVEL,"
+          + " diffusible<LEVEL or weight_gain<PERCENT";
 
   @Spec CommandSpec spec;
 
@@ -59,8 +62,8 @@ final class BakeCommand implements Callable<Integer> {
       required = true,
       paramLabel = "TARGET<LEVEL",
       description =
-          "What must fall below the level: max:PART, mean:PART, probe:NAME, amount or"
-              + " weight_gain (percent of the dry mass), e.g. \"max:body<0.05\","
+          "What must fall below the level: max:PART, mean:PART, probe:NAME, amount, total,"
+              + " diffusible or weight_gain (percent of the dry mass), e.g. \"max:body<0.05\","
               + " \"weight_gain<0.02\". Levels are in the case's units.")
   String target;
 

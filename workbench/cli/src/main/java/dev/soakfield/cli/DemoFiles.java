@@ -14,7 +14,13 @@ final class DemoFiles {
     "sensor-pod.msh",
     "sensor-pod.case.json",
     "sensor-pod-humid.case.json",
-    "sensor-pod-bake.case.json"
+    "sensor-pod-bake.case.json",
+    // the steel scenario of hydrogen work (demonstration data): pipe permeation, plate TDS
+    "steel-pipe-h2.msh",
+    "steel-pipe-h2.case.json",
+    "steel-plate.msh",
+    "steel-plate-charge.case.json",
+    "steel-plate-tds.case.json"
   };
 
   /** The demo case itself (the others are variants beside it). */

@@ -76,6 +76,27 @@ final class PluginsCommand implements Callable<Integer> {
       }
       printTable(out, rows);
     }
+    out.println();
+    out.println(catalog.faceEntries().size() + " face laws (\"kind\": \"law\" on a face group)");
+    for (dev.soakfield.fem.laws.FaceLawEntry e : catalog.faceEntries()) {
+      out.println();
+      out.println(e.id() + ": " + e.provider().description());
+      out.println(
+          "  from " + e.origin().describe() + " (" + e.provider().getClass().getName() + ")");
+      List<String[]> rows = new ArrayList<>();
+      rows.add(new String[] {"parameter", "unit", "default", "valid range", "meaning"});
+      for (LawParameter p : e.provider().parameters()) {
+        rows.add(
+            new String[] {
+              p.name(),
+              p.unit(),
+              p.isRequired() ? "required" : LawBinding.format(p.defaultValue()),
+              range(p),
+              p.description()
+            });
+      }
+      printTable(out, rows);
+    }
     for (Path jar : catalog.jarsWithoutLaws()) {
       out.println();
       out.println(

@@ -16,6 +16,7 @@ import picocli.CommandLine.Command;
       RunCommand.class,
       SweepCommand.class,
       BakeCommand.class,
+      TdsCommand.class,
       ReportCommand.class,
       ExportCommand.class,
       DemoCommand.class,

@@ -36,6 +36,17 @@ public interface ParameterBinder {
   Binding bind(SourceLawProvider provider, Map<String, Object> given);
 
   /**
+   * Checks {@code given} against a face law's declarations, as {@link #bind(SourceLawProvider,
+   * Map)} does for source laws; the key "law" is ignored.
+   *
+   * @throws UnsupportedOperationException from a binder that checks source laws only
+   */
+  default Binding bind(FaceLawProvider provider, Map<String, Object> given) {
+    throw new UnsupportedOperationException(
+        getClass().getName() + " checks source laws only, not face law '" + provider.id() + "'");
+  }
+
+  /**
    * A value written with a unit ("60 kJ/mol", or a bare number meaning {@code unit} itself) in
    * {@code unit}.
    *

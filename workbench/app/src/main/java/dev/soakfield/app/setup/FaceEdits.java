@@ -54,7 +54,7 @@ public final class FaceEdits {
                 e.set("coefficient", keep(old, "coefficient", F.numberNode(1e-8)));
                 e.set("value", keep(old, "value", F.numberNode(1)));
               }
-              case AMBIENT, SEALED -> {
+              case AMBIENT, SEALED, LAW -> {
                 // the kind alone
               }
             }

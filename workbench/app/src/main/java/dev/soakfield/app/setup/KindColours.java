@@ -25,6 +25,7 @@ public final class KindColours {
       case EXCHANGE -> 0x4aa37a;
       case AMBIENT -> 0x8c6cc4;
       case SEALED -> 0x8e8e8e;
+      case LAW -> 0xc0508a;
     };
   }
 
