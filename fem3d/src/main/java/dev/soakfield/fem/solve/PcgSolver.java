@@ -142,12 +142,36 @@ public final class PcgSolver {
       Arrays.fill(x, 0.0);
       return new SolveStats(0, 0.0, 0.0, true, setupSeconds, (System.nanoTime() - start) * 1e-9);
     }
+    // CG's dot products square the residual: far from 1 they underflow (a specimen desorbed to
+    // 1e-150 and less) or overflow, and α = 0/0 ends the solve in NaN. Solving for x/s with s =
+    // ‖D⁻¹b‖ keeps them near 1; ordinary sizes are left alone, so their results stay bit for bit.
+    double scale = rhsNorm < TINY_NORM || rhsNorm > 1 / TINY_NORM ? rhsNorm : 1.0;
+    double[] rhs = b;
+    if (scale != 1.0) {
+      rhs = new double[n];
+      for (int i = 0; i < n; i++) {
+        rhs[i] = b[i] / scale;
+        x[i] /= scale;
+      }
+    }
     FusedCg.Outcome o =
-        cg.solve(matrix, inverseDiagonal, amg, b, x, relativeTolerance * rhsNorm, maxIterations);
+        cg.solve(
+            matrix,
+            inverseDiagonal,
+            amg,
+            rhs,
+            x,
+            relativeTolerance * rhsNorm / scale,
+            maxIterations);
+    if (scale != 1.0) {
+      for (int i = 0; i < n; i++) {
+        x[i] *= scale;
+      }
+    }
     SolveStats stats =
         new SolveStats(
             o.iterations(),
-            o.residual(),
+            o.residual() * scale,
             rhsNorm,
             o.converged(),
             setupSeconds,
@@ -157,6 +181,9 @@ public final class PcgSolver {
     }
     return stats;
   }
+
+  /** Right-hand sides whose scaled norm is below this (or above its inverse) are solved scaled. */
+  static final double TINY_NORM = 1e-100;
 
   private double scaledNorm(double[] v) {
     double s = 0;
