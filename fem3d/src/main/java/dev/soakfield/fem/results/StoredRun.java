@@ -199,6 +199,11 @@ public final class StoredRun {
     return folder.resolve(frames.get(frame).relativeFile());
   }
 
+  /** The point fields the frames hold (those of the first frame), in file order. */
+  public List<String> pointFieldNames() {
+    return VtuReader.outline(framePath(0)).pointFields();
+  }
+
   /** The whole grid of one frame (its mesh and every field), read from its file. */
   public VtuGrid frame(int frame) {
     return VtuReader.read(framePath(frame));

@@ -1,12 +1,25 @@
 package dev.soakfield.app;
 
+import dev.soakfield.fem.results.StoredRun;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
+import java.util.Objects;
 
-/** The nodal fields a result holds and how the view labels them. */
-public enum FieldKind {
-  CONCENTRATION("c", "concentration c"),
-  POTENTIAL("phi", "potential phi"),
-  FIRST_EXCEED("first_exceed", "first time over threshold");
+/**
+ * A nodal field a result holds and how the view labels it: the three every run writes, and the
+ * amount each named trap holds ({@code trapped:<part>:<name>}), which runs with source laws write.
+ */
+public final class FieldKind {
+  /** Prefix of the per-trap fields in the frame files. */
+  public static final String TRAPPED_PREFIX = "trapped:";
+
+  public static final FieldKind CONCENTRATION = new FieldKind("c", "concentration c");
+  public static final FieldKind POTENTIAL = new FieldKind("phi", "potential phi");
+  public static final FieldKind FIRST_EXCEED =
+      new FieldKind("first_exceed", "first time over threshold");
+
+  private static final List<FieldKind> STANDARD = List.of(CONCENTRATION, POTENTIAL, FIRST_EXCEED);
 
   /** Name of the field in the result files. */
   public final String fileName;
@@ -14,20 +27,70 @@ public enum FieldKind {
   /** Words for the colour bar. */
   public final String words;
 
-  FieldKind(String fileName, String words) {
+  private FieldKind(String fileName, String words) {
     this.fileName = fileName;
     this.words = words;
   }
 
-  /** The field of a command-line name: c, phi or first_exceed (also first-exceed). */
+  /** The fields every run writes. */
+  public static List<FieldKind> standard() {
+    return STANDARD;
+  }
+
+  /** The fields of a result: the standard ones, then its per-trap fields in file order. */
+  public static List<FieldKind> of(StoredRun results) {
+    List<FieldKind> all = new ArrayList<>(STANDARD);
+    for (String name : results.pointFieldNames()) {
+      if (name.startsWith(TRAPPED_PREFIX)) {
+        all.add(trapped(name));
+      }
+    }
+    return List.copyOf(all);
+  }
+
+  private static FieldKind trapped(String fileName) {
+    // trapped:<part>:<name> reads as "trapped dislocations (body)"
+    String[] p = fileName.substring(TRAPPED_PREFIX.length()).split(":", 2);
+    String words = p.length == 2 ? "trapped " + p[1] + " (" + p[0] + ")" : "trapped " + p[0];
+    return new FieldKind(fileName, words);
+  }
+
+  /**
+   * The field of a command-line name: c, phi, first_exceed (also first-exceed), or a per-trap field
+   * {@code trapped:<part>:<name>} (whether the result holds it is checked when it is read).
+   */
   public static FieldKind parse(String name) {
-    String n = name.strip().toLowerCase(Locale.ROOT).replace('-', '_');
-    for (FieldKind k : values()) {
+    String stripped = name.strip();
+    if (stripped.startsWith(TRAPPED_PREFIX) && stripped.length() > TRAPPED_PREFIX.length()) {
+      return trapped(stripped);
+    }
+    String n = stripped.toLowerCase(Locale.ROOT).replace('-', '_');
+    for (FieldKind k : STANDARD) {
       if (k.fileName.equals(n)) {
         return k;
       }
     }
     throw new IllegalArgumentException(
-        "field: found '" + name + "', expected c, phi or first_exceed");
+        "field: found '" + name + "', expected c, phi, first_exceed or trapped:<part>:<name>");
+  }
+
+  /** A time field (seconds), shown as times and grey where never reached. */
+  public boolean isTime() {
+    return equals(FIRST_EXCEED);
+  }
+
+  @Override
+  public boolean equals(Object o) {
+    return o instanceof FieldKind k && k.fileName.equals(fileName);
+  }
+
+  @Override
+  public int hashCode() {
+    return Objects.hash(fileName);
+  }
+
+  @Override
+  public String toString() {
+    return fileName;
   }
 }

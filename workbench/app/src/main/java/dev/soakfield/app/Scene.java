@@ -140,7 +140,7 @@ public final class Scene {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (double x : v) {
-          if (settings.field().orElseThrow() == FieldKind.FIRST_EXCEED && x < 0) {
+          if (settings.field().orElseThrow().isTime() && x < 0) {
             continue; // -1 means never: not part of the range
           }
           lo = Math.min(lo, x);
@@ -159,7 +159,7 @@ public final class Scene {
         low = settings.low();
         high = settings.high();
       }
-      boolean never = settings.field().orElseThrow() == FieldKind.FIRST_EXCEED;
+      boolean never = settings.field().orElseThrow().isTime();
       for (int t = 0; t < tris; t++) {
         for (int k = 0; k < 3; k++) {
           double x = v[surface.node(t, k)];

@@ -100,6 +100,19 @@ class TrapInstancesTest {
     assertEquals(sCarb * c[deepest], field[deepest], 1e-5 * sCarb * c[deepest]);
     assertTrue(grid.pointFieldNames().contains("trapped:body:dislocations"));
 
+    // the window and render offer each trap's field, and colour by it
+    dev.soakfield.fem.results.StoredRun stored = dev.soakfield.fem.results.StoredRun.open(out);
+    List<String> offered =
+        dev.soakfield.app.FieldKind.of(stored).stream().map(k -> k.fileName).toList();
+    assertTrue(offered.contains("trapped:body:carbides"), offered.toString());
+    dev.soakfield.app.ViewSettings settings = new dev.soakfield.app.ViewSettings();
+    settings.frame(stored.frameCount() - 1);
+    settings.field(
+        java.util.Optional.of(dev.soakfield.app.FieldKind.parse("trapped:body:carbides")));
+    dev.soakfield.app.Scene scene =
+        new dev.soakfield.app.Scene(dev.soakfield.app.Study.open(out), settings);
+    double largest = java.util.Arrays.stream(field).max().orElseThrow();
+    assertEquals(largest, scene.high(), 1e-6 * largest); // the colour range is this field's
     String report = Files.readString(out.resolve("report.md"));
     assertTrue(report.contains("Trapped amount per trap"), report);
     for (String name : List.of("| dislocations | body |", "| carbides | body |")) {

@@ -179,14 +179,13 @@ final class Overlay {
       double f = hi > lo ? (value - lo) / (hi - lo) : 0;
       float y = (float) (b[3] - f * (b[3] - b[1]));
       line(b[2] + 1, y, b[2] + 6, y, 1.5f, ink);
-      String label =
-          field == FieldKind.FIRST_EXCEED ? Annotations.time(value) : Annotations.number(value);
+      String label = field.isTime() ? Annotations.time(value) : Annotations.number(value);
       text(b[2] + 9, y - 5, label, ink);
     }
-    String title = field.words + " [" + (field == FieldKind.FIRST_EXCEED ? "s" : unit) + "]";
+    String title = field.words + " [" + (field.isTime() ? "s" : unit) + "]";
     float tw = textWidth(title);
     text(Math.max(4, Math.min(b[0], w - tw - 6)), b[1] - 28, title, ink);
-    if (field == FieldKind.FIRST_EXCEED) {
+    if (field.isTime()) {
       text(b[0] - 20, b[3] + 10, "grey: never", ink);
     }
   }

@@ -82,8 +82,8 @@ final class ShowPanel {
       settings.field(Optional.empty());
     }
     if (study.results().isPresent()) {
-      for (FieldKind k : FieldKind.values()) {
-        boolean on = current.isPresent() && current.get() == k;
+      for (FieldKind k : FieldKind.of(study.results().get())) {
+        boolean on = current.isPresent() && current.get().equals(k);
         if (nk_option_label(ctx, k.words, on) && !on) {
           settings.field(Optional.of(k));
           model.probe().fieldChanged(study, k);

@@ -113,7 +113,7 @@ final class UptakePanel {
           new int[] {0xe8c45a},
           "time [" + axis.unit() + "] (the frames)",
           model.settings().field().map(k -> k.words).orElse("value")
-              + (model.settings().field().orElse(null) == FieldKind.CONCENTRATION
+              + (FieldKind.CONCENTRATION.equals(model.settings().field().orElse(null))
                   ? " [" + r.units().concentration() + "]"
                   : ""));
     }
