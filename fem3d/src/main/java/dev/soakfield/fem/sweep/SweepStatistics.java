@@ -15,7 +15,10 @@ import java.util.List;
  * value and how many do not (a threshold never crossed, a time after the end), minimum, the 5th,
  * 25th, 50th, 75th and 95th percentiles, maximum, mean and standard deviation. Percentiles
  * interpolate linearly between order statistics (Hyndman and Fan, The American Statistician 50
- * (1996), definition 7).
+ * (1996), definition 7). A threshold that a case never crossed counts as crossed after every time
+ * (+∞, written "Infinity"): percentiles beyond the share of cases that crossed, the maximum, the
+ * mean and the sd then say so rather than give a time from the crossed cases alone. Times after a
+ * case's end (an {@code amount@} column) are left out.
  */
 public final class SweepStatistics {
   public static final String FILE = "statistics.csv";
@@ -73,33 +76,43 @@ public final class SweepStatistics {
   }
 
   static Column column(String name, double[] all) {
-    double[] v = Arrays.stream(all).filter(x -> !Double.isNaN(x)).sorted().toArray();
-    int n = v.length;
+    // a threshold never crossed was crossed after the end, if ever: it counts as +∞, so that a
+    // percentile the crossed cases alone cannot reach reads "not crossed", never a time too early
+    boolean censored = name.startsWith("threshold:");
+    double[] v =
+        Arrays.stream(all)
+            .map(x -> Double.isNaN(x) && censored ? Double.POSITIVE_INFINITY : x)
+            .filter(x -> !Double.isNaN(x))
+            .sorted()
+            .toArray();
+    double[] finite = Arrays.stream(v).filter(Double::isFinite).toArray();
+    int n = finite.length;
     double mean = Double.NaN;
     double sd = Double.NaN;
-    if (n > 0) {
+    if (n > 0 && n == v.length) {
       double sum = 0;
-      for (double x : v) {
+      for (double x : finite) {
         sum += x;
       }
       mean = sum / n;
       double sq = 0;
-      for (double x : v) {
+      for (double x : finite) {
         sq += (x - mean) * (x - mean);
       }
       sd = n > 1 ? Math.sqrt(sq / (n - 1)) : Double.NaN;
     }
+    boolean any = n > 0;
     return new Column(
         name,
         n,
         all.length - n,
-        n > 0 ? v[0] : Double.NaN,
-        percentile(v, LEVELS[0]),
-        percentile(v, LEVELS[1]),
-        percentile(v, LEVELS[2]),
-        percentile(v, LEVELS[3]),
-        percentile(v, LEVELS[4]),
-        n > 0 ? v[n - 1] : Double.NaN,
+        any ? v[0] : Double.NaN,
+        any ? percentile(v, LEVELS[0]) : Double.NaN,
+        any ? percentile(v, LEVELS[1]) : Double.NaN,
+        any ? percentile(v, LEVELS[2]) : Double.NaN,
+        any ? percentile(v, LEVELS[3]) : Double.NaN,
+        any ? percentile(v, LEVELS[4]) : Double.NaN,
+        any ? v[v.length - 1] : Double.NaN,
         mean,
         sd);
   }
@@ -113,7 +126,12 @@ public final class SweepStatistics {
     double h = (n - 1) * p;
     int lo = (int) Math.floor(h);
     int hi = Math.min(lo + 1, n - 1);
-    return sorted[lo] + (h - lo) * (sorted[hi] - sorted[lo]);
+    if (h == lo || sorted[hi] == sorted[lo]) {
+      return sorted[lo];
+    }
+    return sorted[hi] == Double.POSITIVE_INFINITY
+        ? Double.POSITIVE_INFINITY
+        : sorted[lo] + (h - lo) * (sorted[hi] - sorted[lo]);
   }
 
   public void write(Path file) throws IOException {

@@ -197,4 +197,25 @@ class SweepRunTest {
     assertEquals(8.8, SweepStatistics.percentile(v, 0.95), 1e-12); // 4 + 0.8·(10 − 4)
     assertTrue(Double.isNaN(SweepStatistics.percentile(new double[0], 0.5)));
   }
+
+  /**
+   * A threshold never crossed counts as crossed after the end: the median of {100, 200, never,
+   * never} is not 150 (what the crossed cases alone give) but "not crossed".
+   */
+  @Test
+  void thresholdsNeverCrossedKeepPercentilesFromReadingTooEarly() {
+    double[] times = {100, 200, Double.NaN, Double.NaN};
+    SweepStatistics.Column t = SweepStatistics.column("threshold:x", times);
+    assertEquals(2, t.cases());
+    assertEquals(2, t.missing());
+    assertEquals(100, t.min());
+    assertEquals(175, t.p25(), 1e-12); // 100 + 0.75·(200 − 100)
+    assertEquals(Double.POSITIVE_INFINITY, t.p50());
+    assertEquals(Double.POSITIVE_INFINITY, t.max());
+    assertTrue(Double.isNaN(t.mean()));
+    // control: the same numbers as amounts after a case's end are left out, not censored
+    SweepStatistics.Column a = SweepStatistics.column("amount@900", times);
+    assertEquals(150, a.p50(), 1e-12);
+    assertEquals(150, a.mean(), 1e-12);
+  }
 }

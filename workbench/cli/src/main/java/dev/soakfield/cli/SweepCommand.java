@@ -145,6 +145,11 @@ final class SweepCommand implements Callable<Integer> {
     return ExitCodes.OK;
   }
 
+  /** A statistic for the terminal; a threshold percentile beyond the crossed cases says so. */
+  private static String figure(double v, String unit) {
+    return Double.isInfinite(v) ? "not crossed" : String.format(Locale.ROOT, "%.4g%s", v, unit);
+  }
+
   static void report(PrintWriter out, SweepRun.Outcome o, int plots) {
     int n = o.table().rows().size();
     out.printf(
@@ -172,20 +177,17 @@ final class SweepCommand implements Callable<Integer> {
       String unit = time ? " s" : "";
       out.printf(
           Locale.ROOT,
-          "  %-28s %d cases: min %.4g%s, 5%% %.4g%s, median %.4g%s, 95%% %.4g%s, max %.4g%s%s%n",
+          "  %-28s %d cases: min %s, 5%% %s, median %s, 95%% %s, max %s%s%n",
           c.name(),
           c.cases(),
-          c.min(),
-          unit,
-          c.p5(),
-          unit,
-          c.p50(),
-          unit,
-          c.p95(),
-          unit,
-          c.max(),
-          unit,
-          c.missing() > 0 ? " (" + c.missing() + " cases without a value: never crossed)" : "");
+          figure(c.min(), unit),
+          figure(c.p5(), unit),
+          figure(c.p50(), unit),
+          figure(c.p95(), unit),
+          figure(c.max(), unit),
+          c.missing() > 0
+              ? " (" + c.missing() + " cases never crossed: counted as crossing after the end)"
+              : "");
     }
     out.println(
         "caution: model estimates from the data and distributions given; percentiles of a sweep"

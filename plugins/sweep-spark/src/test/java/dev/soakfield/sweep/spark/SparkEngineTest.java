@@ -35,6 +35,7 @@ class SparkEngineTest {
 
   private Path sweep;
   private final List<String> log = new ArrayList<>();
+  private List<Path> plugins = List.of();
 
   @BeforeEach
   void files() throws IOException {
@@ -56,7 +57,8 @@ class SparkEngineTest {
             { "base": "sheet.json",
               "vary": { "materials.body.diffusivity": { "values": [1e-10, -1e-10] },
                         "faces.xmin.value": { "distribution": "uniform", "low": 0.8,
-                                              "high": 1.2 } },
+                                              "high": 1.2 },
+                        "time.end": { "values": ["25 min"] } },
               "samples": 5, "seed": 11, "sampling": "latin-hypercube",
               "collect": { "times": [300, 900] } }
             """);
@@ -68,7 +70,7 @@ class SparkEngineTest {
         SweepPlan.of(SweepFile.read(sweep)),
         engine,
         new EngineSettings(
-            dir.resolve(out), dir.resolve("sheet.msh"), List.of(), 2, master, log::add),
+            dir.resolve(out), dir.resolve("sheet.msh"), plugins, 2, master, log::add),
         false,
         false);
   }
@@ -93,12 +95,29 @@ class SparkEngineTest {
     Row first = p.orderBy("case").first();
     assertEquals("01", first.getString(0).substring(2));
     assertEquals(1e-10, first.getDouble(1));
+    assertEquals("25 min", first.getString(first.fieldIndex("time.end")));
     assertEquals(expectedFirstAmount, first.getDouble(first.fieldIndex("amount@300")));
     assertTrue(p.orderBy("case").collectAsList().get(9).isNullAt(first.fieldIndex("amount@300")));
   }
 
+  /**
+   * A plugins folder holding a jar without laws (a library a plugin would use): shipped to the
+   * executors and loaded there as on this machine, where it changes nothing.
+   */
+  private void pluginFolderWithALibrary() throws IOException {
+    Path folder = Files.createDirectories(dir.resolve("plugins"));
+    try (var jar =
+        new java.util.jar.JarOutputStream(Files.newOutputStream(folder.resolve("helper.jar")))) {
+      jar.putNextEntry(new java.util.jar.JarEntry("helper.txt"));
+      jar.write("a library of a plugin".getBytes(java.nio.charset.StandardCharsets.UTF_8));
+      jar.closeEntry();
+    }
+    plugins = List.of(folder, Files.createDirectories(dir.resolve("more-plugins")));
+  }
+
   @Test
   void localModeGivesTheLocalEnginesTable() throws IOException {
+    pluginFolderWithALibrary();
     SparkSession s = SparkSessions.local();
     try {
       sameTableAsTheLocalEngine("local[2]");

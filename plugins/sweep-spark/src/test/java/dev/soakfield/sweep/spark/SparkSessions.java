@@ -8,12 +8,12 @@ import org.apache.spark.sql.SparkSession;
 
 /**
  * Spark sessions for tests: loopback only, no web UI, Spark's logs at WARN (log4j2-test). Local
- * cluster mode starts a master and two workers in this process and an executor process for each; it
- * needs SPARK_HOME with a jars/ folder (an empty one, made here; the build sets SPARK_HOME) and the
- * test's class path for the executors.
+ * cluster mode starts a master and a worker in this process and an executor process of two cores;
+ * it needs SPARK_HOME with a jars/ folder (an empty one, made here; the build sets SPARK_HOME) and
+ * the test's class path for the executors.
  */
 final class SparkSessions {
-  static final String LOCAL_CLUSTER = "local-cluster[2,1,1024]";
+  static final String LOCAL_CLUSTER = "local-cluster[1,2,1024]";
 
   private SparkSessions() {}
 
