@@ -31,7 +31,8 @@ final class CaseBinder {
           "threshold",
           "thresholds",
           "species",
-          "units");
+          "units",
+          "accuracy");
 
   private final CaseFields fields;
   private final Path caseFile;
@@ -138,6 +139,15 @@ final class CaseBinder {
           fields.positive(thresholdNode.get(), "threshold", "a positive concentration");
       threshold = t.isPresent() ? Optional.of(t) : Optional.empty();
     }
+    // the relative error estimate above which a run warns (summary.json "accuracy")
+    Optional<OptionalDouble> accuracy = Optional.of(OptionalDouble.empty());
+    Optional<CaseNode> accuracyNode = CaseFields.optional(obj, "accuracy");
+    if (accuracyNode.isPresent()) {
+      OptionalDouble a =
+          fields.positive(
+              accuracyNode.get(), "accuracy", "a positive relative error, such as 0.01 for 1 %");
+      accuracy = a.isPresent() ? Optional.of(a) : Optional.empty();
+    }
     Optional<Quantities> quantities =
         new UnitsBinder(fields)
             .bind(
@@ -163,7 +173,8 @@ final class CaseBinder {
         || initial.isEmpty()
         || time.isEmpty()
         || probes.isEmpty()
-        || threshold.isEmpty()) {
+        || threshold.isEmpty()
+        || accuracy.isEmpty()) {
       return Optional.empty();
     }
     return Optional.of(
@@ -182,7 +193,8 @@ final class CaseBinder {
             temperature,
             exposure.get(),
             quantities.get(),
-            thresholds.get()));
+            thresholds.get(),
+            accuracy.get()));
   }
 
   private Optional<Path> mesh(CaseNode node) {

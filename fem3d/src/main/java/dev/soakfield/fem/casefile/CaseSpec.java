@@ -48,7 +48,8 @@ public record CaseSpec(
     double temperature,
     Optional<ExposureHistory> exposure,
     Quantities quantities,
-    List<ThresholdSpec> thresholds) {
+    List<ThresholdSpec> thresholds,
+    OptionalDouble accuracy) {
   public CaseSpec {
     Objects.requireNonNull(caseFile, "caseFile");
     Objects.requireNonNull(mesh, "mesh");
@@ -64,6 +65,7 @@ public record CaseSpec(
     Objects.requireNonNull(exposure, "exposure");
     Objects.requireNonNull(quantities, "quantities");
     thresholds = List.copyOf(thresholds);
+    Objects.requireNonNull(accuracy, "accuracy");
   }
 
   /** The temperature over time: the exposure's, the constant one, or 20 °C. */
@@ -96,7 +98,8 @@ public record CaseSpec(
         temperature,
         newExposure,
         quantities,
-        thresholds);
+        thresholds,
+        accuracy);
   }
 
   /** The same case with its mesh read from another file (a result folder's copy). */
@@ -116,7 +119,8 @@ public record CaseSpec(
         temperature,
         exposure,
         quantities,
-        thresholds);
+        thresholds,
+        accuracy);
   }
 
   /** Where the value at {@code path} stands, or line 0 when the file does not hold the path. */

@@ -28,7 +28,8 @@ final class SummaryContents {
       StopRule stop,
       List<String> warnings,
       ThresholdWatch thresholds,
-      List<Map<String, Object>> rangeExcursions) {
+      List<Map<String, Object>> rangeExcursions,
+      Map<String, Object> accuracy) {
     TetMesh mesh = model.space().mesh();
     Map<String, Object> root = new LinkedHashMap<>();
     root.put("case", spec.caseFile().toString());
@@ -80,6 +81,9 @@ final class SummaryContents {
     if (!spec.thresholds().isEmpty()) {
       root.put("thresholds", thresholds.summary(spec.quantities().concentration()));
     }
+    // estimated discretisation errors at the last output: relative for the uptake and probes,
+    // seconds for threshold times
+    root.put("accuracy", accuracy);
     root.put("units", spec.quantities().describe());
     if (!rangeExcursions.isEmpty()) {
       root.put("range_excursions", rangeExcursions);
