@@ -200,8 +200,13 @@ final class AccuracyWatch {
   /** The summary's "accuracy" block: relative errors of uptake and probes, threshold seconds. */
   Map<String, Object> summary() {
     Map<String, Object> root = new LinkedHashMap<>();
+    double[] q = lastQuantities;
+    if (q == null) {
+      q = new double[1 + probeCount + thresholds.size()];
+      java.util.Arrays.fill(q, Double.NaN); // nothing seen: no estimate
+    }
     double[] time = track.estimates();
-    double uptake = lastQuantities[0] - amountStart;
+    double uptake = q[0] - amountStart;
     double amount =
         lastSpace == null
             ? Double.NaN
@@ -209,7 +214,7 @@ final class AccuracyWatch {
     root.put("amount", number(amount));
     Map<String, Object> probes = new LinkedHashMap<>();
     for (int p = 0; p < probeCount; p++) {
-      double value = lastQuantities[1 + p];
+      double value = q[1 + p];
       double rel =
           lastSpace == null
               ? Double.NaN
