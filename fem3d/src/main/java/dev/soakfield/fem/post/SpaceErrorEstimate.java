@@ -61,13 +61,15 @@ public final class SpaceErrorEstimate {
     double[] error = new double[tets];
     double[] vol = new double[tets];
     double[] grad = new double[3];
+    double[] mean = new double[3];
+    double[] scratch = new double[12];
     TetQuadrature rule = TetQuadrature.DEGREE_2;
     for (int g = 0; g < mesh.volumeGroups().size(); g++) {
       java.util.Arrays.fill(recovered, 0);
       java.util.Arrays.fill(weight, 0);
       for (int t = 0; t < tets; t++) {
         if (mesh.tetGroup(t) == g) {
-          vol[t] = linearGradient(mesh, t, phi, tetS[t], grad);
+          vol[t] = linearGradient(mesh, t, phi, tetS[t], grad, scratch);
           for (int i = 0; i < 4; i++) {
             int v = mesh.tetNode(t, i);
             recovered[3 * v] += vol[t] * grad[0];
@@ -82,9 +84,9 @@ public final class SpaceErrorEstimate {
         if (mesh.tetGroup(t) != g) {
           continue;
         }
-        linearGradient(mesh, t, phi, tetS[t], grad);
+        linearGradient(mesh, t, phi, tetS[t], grad, scratch);
         double gap = 0;
-        double[] mean = new double[3];
+        java.util.Arrays.fill(mean, 0);
         for (int k = 0; k < rule.size(); k++) {
           double gx = -grad[0];
           double gy = -grad[1];
@@ -108,37 +110,40 @@ public final class SpaceErrorEstimate {
     return new SpaceErrorEstimate(error, vol);
   }
 
-  /** ∇(S·φ) of a linear tetrahedron into grad; returns its volume. */
-  private static double linearGradient(TetMesh mesh, int t, double[] phi, double s, double[] grad) {
+  /** ∇(S·φ) of a linear tetrahedron into grad (scratch: 12 numbers); returns its volume. */
+  private static double linearGradient(
+      TetMesh mesh, int t, double[] phi, double s, double[] grad, double[] scratch) {
     int a = mesh.tetNode(t, 0);
-    double[] e = new double[9];
-    double[] d = new double[3];
+    double[] e = scratch; // the edges from corner 0 in 0..8, the differences of c in 9..11
     for (int k = 0; k < 3; k++) {
       int b = mesh.tetNode(t, k + 1);
       for (int r = 0; r < 3; r++) {
         e[3 * k + r] = mesh.coord(b, r) - mesh.coord(a, r);
       }
-      d[k] = s * (phi[b] - phi[a]);
+      e[9 + k] = s * (phi[b] - phi[a]);
     }
+    double d0 = e[9];
+    double d1 = e[10];
+    double d2 = e[11];
     // solve E·grad = d (rows of E the edges from corner 0) by Cramer's rule
     double det =
         e[0] * (e[4] * e[8] - e[5] * e[7])
             - e[1] * (e[3] * e[8] - e[5] * e[6])
             + e[2] * (e[3] * e[7] - e[4] * e[6]);
     grad[0] =
-        (d[0] * (e[4] * e[8] - e[5] * e[7])
-                - e[1] * (d[1] * e[8] - e[5] * d[2])
-                + e[2] * (d[1] * e[7] - e[4] * d[2]))
+        (d0 * (e[4] * e[8] - e[5] * e[7])
+                - e[1] * (d1 * e[8] - e[5] * d2)
+                + e[2] * (d1 * e[7] - e[4] * d2))
             / det;
     grad[1] =
-        (e[0] * (d[1] * e[8] - e[5] * d[2])
-                - d[0] * (e[3] * e[8] - e[5] * e[6])
-                + e[2] * (e[3] * d[2] - d[1] * e[6]))
+        (e[0] * (d1 * e[8] - e[5] * d2)
+                - d0 * (e[3] * e[8] - e[5] * e[6])
+                + e[2] * (e[3] * d2 - d1 * e[6]))
             / det;
     grad[2] =
-        (e[0] * (e[4] * d[2] - d[1] * e[7])
-                - e[1] * (e[3] * d[2] - d[1] * e[6])
-                + d[0] * (e[3] * e[7] - e[4] * e[6]))
+        (e[0] * (e[4] * d2 - d1 * e[7])
+                - e[1] * (e[3] * d2 - d1 * e[6])
+                + d0 * (e[3] * e[7] - e[4] * e[6]))
             / det;
     return Math.abs(det) / 6;
   }
