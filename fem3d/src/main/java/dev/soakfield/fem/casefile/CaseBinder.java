@@ -32,7 +32,8 @@ final class CaseBinder {
           "thresholds",
           "permeation",
           "species",
-          "units");
+          "units",
+          "accuracy");
 
   private final CaseFields fields;
   private final Path caseFile;
@@ -139,6 +140,15 @@ final class CaseBinder {
           fields.positive(thresholdNode.get(), "threshold", "a positive concentration");
       threshold = t.isPresent() ? Optional.of(t) : Optional.empty();
     }
+    // the relative error estimate above which a run warns (summary.json "accuracy")
+    Optional<OptionalDouble> accuracy = Optional.of(OptionalDouble.empty());
+    Optional<CaseNode> accuracyNode = CaseFields.optional(obj, "accuracy");
+    if (accuracyNode.isPresent()) {
+      OptionalDouble a =
+          fields.positive(
+              accuracyNode.get(), "accuracy", "a positive relative error, such as 0.01 for 1 %");
+      accuracy = a.isPresent() ? Optional.of(a) : Optional.empty();
+    }
     Optional<Quantities> quantities =
         new UnitsBinder(fields)
             .bind(
@@ -170,7 +180,8 @@ final class CaseBinder {
         || initial.isEmpty()
         || time.isEmpty()
         || probes.isEmpty()
-        || threshold.isEmpty()) {
+        || threshold.isEmpty()
+        || accuracy.isEmpty()) {
       return Optional.empty();
     }
     return Optional.of(
@@ -190,7 +201,8 @@ final class CaseBinder {
             exposure.get(),
             quantities.get(),
             thresholds.get(),
-            share.getAsDouble()));
+            share.getAsDouble(),
+            accuracy.get()));
   }
 
   /** {"breakthrough_share": s}: the share of the steady flux that marks breakthrough, 0 < s < 1. */

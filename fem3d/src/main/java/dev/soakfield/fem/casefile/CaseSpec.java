@@ -51,7 +51,8 @@ public record CaseSpec(
     Optional<ExposureHistory> exposure,
     Quantities quantities,
     List<ThresholdSpec> thresholds,
-    double breakthroughShare) {
+    double breakthroughShare,
+    OptionalDouble accuracy) {
   /** The breakthrough share when the case states none (common practice: 10 %). */
   public static final double DEFAULT_BREAKTHROUGH_SHARE = 0.1;
 
@@ -70,6 +71,7 @@ public record CaseSpec(
     Objects.requireNonNull(exposure, "exposure");
     Objects.requireNonNull(quantities, "quantities");
     thresholds = List.copyOf(thresholds);
+    Objects.requireNonNull(accuracy, "accuracy");
     if (!(breakthroughShare > 0 && breakthroughShare < 1)) {
       throw new IllegalArgumentException("breakthrough share in (0, 1), got " + breakthroughShare);
     }
@@ -108,7 +110,8 @@ public record CaseSpec(
         exposure,
         quantities,
         thresholds,
-        DEFAULT_BREAKTHROUGH_SHARE);
+        DEFAULT_BREAKTHROUGH_SHARE,
+        OptionalDouble.empty());
   }
 
   /** The temperature over time: the exposure's, the constant one, or 20 °C. */
@@ -142,7 +145,8 @@ public record CaseSpec(
         newExposure,
         quantities,
         thresholds,
-        breakthroughShare);
+        breakthroughShare,
+        accuracy);
   }
 
   /** The same case starting from {@code newInitial} (a TDS ramp from an earlier run's state). */
@@ -163,7 +167,8 @@ public record CaseSpec(
         exposure,
         quantities,
         thresholds,
-        breakthroughShare);
+        breakthroughShare,
+        accuracy);
   }
 
   /** The same case with its mesh read from another file (a result folder's copy). */
@@ -184,7 +189,8 @@ public record CaseSpec(
         exposure,
         quantities,
         thresholds,
-        breakthroughShare);
+        breakthroughShare,
+        accuracy);
   }
 
   /** Where the value at {@code path} stands, or line 0 when the file does not hold the path. */

@@ -40,8 +40,14 @@ public final class FrameWriter {
 
   /** Writes the frame at time t with these nodal fields. */
   public void write(double t, List<VtuWriter.Field> pointFields) throws IOException {
+    write(t, pointFields, List.of());
+  }
+
+  /** Writes the frame at time t with these nodal fields and fields per tetrahedron. */
+  public void write(double t, List<VtuWriter.Field> pointFields, List<VtuWriter.Field> cellFields)
+      throws IOException {
     String name = String.format(Locale.ROOT, "fields/c_%04d.vtu", frames.size());
-    vtu.write(folder.resolve(name), pointFields);
+    vtu.write(folder.resolve(name), pointFields, cellFields);
     frames.add(new PvdEntry(t, name));
   }
 

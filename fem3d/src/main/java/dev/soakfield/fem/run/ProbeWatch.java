@@ -70,6 +70,15 @@ final class ProbeWatch {
     last = pv;
   }
 
+  /** The tetrahedron each probe lies in, −1 for one outside the mesh. */
+  int[] tets() {
+    int[] t = new int[probes.size()];
+    for (int i = 0; i < t.length; i++) {
+      t[i] = probes.get(i).map(PointLocator.Probe::tet).orElse(-1);
+    }
+    return t;
+  }
+
   /** The values after the last step, empty before the first. */
   Optional<double[]> last() {
     return Optional.ofNullable(last);

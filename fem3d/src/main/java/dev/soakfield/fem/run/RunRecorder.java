@@ -55,6 +55,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
   private final double[] partAmounts0;
   private final double end;
   private final ThresholdWatch watch;
+  private final AccuracyWatch accuracy;
   private final Optional<RangeWatch> range;
   private final double[] partVolume;
   private final double[] scales;
@@ -133,6 +134,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
             spec.quantities().massPerAmount().orElse(Double.NaN));
     partVolume = asm.integratePerGroup(nodalOnes, ones);
     watch = new ThresholdWatch(spec.thresholds(), mesh, spec.probes());
+    accuracy = new AccuracyWatch(spec, mesh, probes.tets(), partVolume, scales);
     range = RangeWatch.of(model, end);
     // the amount before prescribed faces are raised
     balance = new BalanceLedger(mesh.faceGroups().size(), stepper.amount(model.initialPhi(), 0.0));
@@ -158,7 +160,9 @@ final class RunRecorder implements StepListener, AutoCloseable {
       double[] raised = initial.faceInflow();
       balance.start(raised, initial.amount());
       lastMaxima = parts.maxima(initial.phi());
-      watch.start(reading(0.0, initial.phi()));
+      ThresholdWatch.Reading r = reading(0.0, initial.phi());
+      watch.start(r);
+      accuracy.start(initial.amount(), probes.values(initial.phi(), shownS), r);
       series.row(rows.row(figures(0.0, 0.0, initial.phi(), raised, lastMaxima)));
       writeFrame(0.0, initial.phi());
     } catch (IOException e) {
@@ -178,7 +182,17 @@ final class RunRecorder implements StepListener, AutoCloseable {
       lastTime = t;
       clock.step(t, dt, phi);
       probes.step(t, dt, phi, shownS);
-      watch.step(reading(t, phi));
+      ThresholdWatch.Reading now = reading(t, phi);
+      watch.step(now);
+      boolean crank = spec.time().scheme() == dev.soakfield.fem.casefile.TimeScheme.CRANK_NICOLSON;
+      accuracy.step(
+          dt,
+          dev.soakfield.fem.time.TimeSettings.thetaOfStep(crank, steps),
+          out.amount(),
+          probes.values(phi, shownS),
+          now,
+          phi,
+          tetS);
       range.ifPresent(r -> r.step(t, phi, output, nodalS));
       series.row(rows.row(figures(t, dt, phi, inflow, maxima)));
       if (output) {
@@ -264,6 +278,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     probes.snapshot(b);
     watch.snapshot(b);
     range.ifPresent(r -> r.snapshot(b));
+    accuracy.snapshot(b);
     if (lastMaxima != null) {
       b.put("rec.last.maxima", lastMaxima);
     }
@@ -282,6 +297,7 @@ final class RunRecorder implements StepListener, AutoCloseable {
     probes.restore(b);
     watch.restore(b);
     range.ifPresent(r -> r.restore(b));
+    accuracy.restore(b);
     lastMaxima = b.has("rec.last.maxima") ? b.get("rec.last.maxima") : null;
     frames.ifPresent(f -> f.restore(b));
   }
@@ -347,7 +363,15 @@ final class RunRecorder implements StepListener, AutoCloseable {
       }
     }
     long start = System.nanoTime();
-    frames.get().write(t, f);
+    // where refinement would help: the estimated mean |c − c_h| per tetrahedron
+    List<VtuWriter.Field> cells =
+        List.of(
+            new VtuWriter.Field(
+                AccuracyWatch.FIELD,
+                1,
+                accuracy.atOutput(phi, tetS),
+                spec.quantities().concentration()));
+    frames.get().write(t, f, cells);
     outputSeconds += (System.nanoTime() - start) * 1e-9;
   }
 
@@ -372,6 +396,8 @@ final class RunRecorder implements StepListener, AutoCloseable {
             dev.soakfield.fem.results.Series.read(dir.resolve(ResultFiles.SERIES)),
             mesh,
             spec.breakthroughShare());
+    accuracy.crossings(watch.firstTimes());
+    warnings.addAll(accuracy.warnings());
     StateFile.write(
         dir.resolve(StateFile.NAME),
         new StateFile.State(totals.endTime(), totals.finalPhi(), stepper.lawStates()));
@@ -388,7 +414,8 @@ final class RunRecorder implements StepListener, AutoCloseable {
             warnings,
             watch,
             range.map(RangeWatch::outputs).orElse(List.of()),
-            permeation));
+            permeation,
+            accuracy.summary()));
   }
 
   @Override

@@ -29,7 +29,8 @@ final class SummaryContents {
       List<String> warnings,
       ThresholdWatch thresholds,
       List<Map<String, Object>> rangeExcursions,
-      Map<String, Object> permeation) {
+      Map<String, Object> permeation,
+      Map<String, Object> accuracy) {
     TetMesh mesh = model.space().mesh();
     Map<String, Object> root = new LinkedHashMap<>();
     root.put("case", spec.caseFile().toString());
@@ -83,6 +84,9 @@ final class SummaryContents {
     }
     // per unit area, SI: the amount unit of the solve (kg or mol) per m² and s; times in s
     root.put("permeation", permeation);
+    // estimated discretisation errors at the last output: relative for the uptake and probes,
+    // seconds for threshold times
+    root.put("accuracy", accuracy);
     root.put("units", spec.quantities().describe());
     if (!rangeExcursions.isEmpty()) {
       root.put("range_excursions", rangeExcursions);

@@ -22,6 +22,7 @@ public final class Verification {
     checks.addAll(RoundParts.checks());
     checks.addAll(Manufactured.checks());
     checks.addAll(DampedStart.checks());
+    checks.addAll(AccuracyEstimates.checks());
     return checks;
   }
 }

@@ -70,15 +70,14 @@ class RunPipelineTest {
     JsonNode summary = new ObjectMapper().readTree(out.resolve("summary.json").toFile());
     assertTrue(summary.get("balance").get("relative").asDouble() < 1e-10);
     assertEquals(400, summary.get("solver").get("steps").asInt());
-    // the centre of the sheet reaches c = 0.5 at 946.87 s: Crank (1975) eq. 4.17 at x = 0, solved
-    // here by bisection. Quadratic elements of 25 µm and Crank–Nicolson steps of 2.5 s leave the
-    // centre value about 1e-5 off; the crossing is interpolated linearly inside a step, whose
-    // error is below dt²·|c''|/(8·|c'|) ≈ 0.01 s: 0.1 s is allowed
+    // the centre of the sheet reaches c = 0.5 at 946.870 s: Crank (1975) eq. 4.17 at x = 0, solved
+    // here by bisection. Quadratic elements of 25 µm and Crank–Nicolson steps of 2.5 s put the
+    // crossing, interpolated linearly inside its step, 0.006 s late (measured): 0.02 s is allowed
     double exact = centreCrossing(1e-10, 0.5e-3, 0.5);
     assertEquals(946.87, exact, 0.01);
     double first =
         summary.get("threshold").get("first_time").get("probes").get("centre").asDouble();
-    assertEquals(exact, first, 0.1);
+    assertEquals(exact, first, 0.02);
     assertTrue(Files.exists(out.resolve("fields.pvd")));
     try (var frames = Files.list(out.resolve("fields"))) {
       assertEquals(4, frames.count()); // t = 0 and three outputs

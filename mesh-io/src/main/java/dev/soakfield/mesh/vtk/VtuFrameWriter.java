@@ -57,15 +57,21 @@ public final class VtuFrameWriter {
    * @throws IllegalArgumentException when a field's length does not fit the mesh or names repeat
    */
   public void write(Path file, List<VtuWriter.Field> pointFields) throws IOException {
+    write(file, pointFields, List.of());
+  }
+
+  /**
+   * Writes one frame with these point fields and cell fields (one value or three per tetrahedron,
+   * written before the volume group index in the cell data).
+   *
+   * @throws IllegalArgumentException when a field's length does not fit the mesh or names repeat
+   */
+  public void write(Path file, List<VtuWriter.Field> pointFields, List<VtuWriter.Field> cellFields)
+      throws IOException {
     VtuWriter.checkPointFields(pointFields, mesh.nodeCount());
-    List<EncodedArray> fields = new ArrayList<>();
-    for (VtuWriter.Field f : pointFields) {
-      VtkArray.Type type = encoding.doubleFields() ? VtkArray.Type.FLOAT64 : VtkArray.Type.FLOAT32;
-      fields.add(
-          EncodedArray.of(
-              VtkArray.floats(f.name(), f.unit(), type, f.components(), f.values()),
-              encoding.zlib()));
-    }
+    checkCellFields(cellFields);
+    List<EncodedArray> fields = encoded(pointFields);
+    List<EncodedArray> cells = encoded(cellFields);
     MeshCopy from = usableSource(file);
     List<EncodedArray> meshArrays = from == null ? meshArrays() : null;
     long[] meshLengths = from == null ? lengths(meshArrays) : from.lengths();
@@ -92,6 +98,12 @@ public final class VtuFrameWriter {
     int m = 0;
     for (int s = 0; s < sections.length; s++) {
       xml.append("      <").append(sections[s]).append(">\n");
+      if (s == 0) {
+        for (EncodedArray c : cells) {
+          tag(xml, c.array, offset);
+          offset += c.length();
+        }
+      }
       for (int k = 0; k < arraysIn[s]; k++, m++) {
         tag(xml, described[m], offset);
         offset += meshLengths[m];
@@ -110,6 +122,9 @@ public final class VtuFrameWriter {
       out.write(xml.toString().getBytes(StandardCharsets.UTF_8));
       for (EncodedArray f : fields) {
         f.writeTo(out);
+      }
+      for (EncodedArray c : cells) {
+        c.writeTo(out);
       }
       out.flush();
       start = channel.position();
@@ -132,6 +147,37 @@ public final class VtuFrameWriter {
               meshLengths,
               Files.size(file),
               Files.getLastModifiedTime(file));
+    }
+  }
+
+  private List<EncodedArray> encoded(List<VtuWriter.Field> given) {
+    List<EncodedArray> out = new ArrayList<>();
+    for (VtuWriter.Field f : given) {
+      VtkArray.Type type = encoding.doubleFields() ? VtkArray.Type.FLOAT64 : VtkArray.Type.FLOAT32;
+      out.add(
+          EncodedArray.of(
+              VtkArray.floats(f.name(), f.unit(), type, f.components(), f.values()),
+              encoding.zlib()));
+    }
+    return out;
+  }
+
+  private void checkCellFields(List<VtuWriter.Field> cellFields) {
+    java.util.Set<String> names = new java.util.HashSet<>();
+    names.add(groupField);
+    for (VtuWriter.Field f : cellFields) {
+      if (f.values().length != (long) f.components() * mesh.tetCount()) {
+        throw new IllegalArgumentException(
+            "cell field '"
+                + f.name()
+                + "': found "
+                + f.values().length
+                + " values, expected "
+                + (long) f.components() * mesh.tetCount());
+      }
+      if (!names.add(f.name())) {
+        throw new IllegalArgumentException("cell field '" + f.name() + "' named twice");
+      }
     }
   }
 

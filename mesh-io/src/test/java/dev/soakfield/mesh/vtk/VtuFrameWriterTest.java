@@ -41,6 +41,42 @@ class VtuFrameWriterTest {
   }
 
   @ParameterizedTest
+  @CsvSource({"false,false", "true,true"})
+  void cellFieldsStandBeforeTheGroupAndReadBackInEveryFrame(boolean doubles, boolean zlib)
+      throws Exception {
+    TetMesh mesh = StructuredMesher.box(0.3, 0.2, 0.1, 3, 2, 2, 1);
+    VtuFrameWriter w = new VtuFrameWriter(mesh, "group", new VtuEncoding(doubles, zlib));
+    for (int frame = 0; frame < 2; frame++) {
+      double[] e = new double[mesh.tetCount()];
+      for (int t = 0; t < e.length; t++) {
+        e[t] = Math.sqrt(t + 1.0) / (frame + 3);
+      }
+      Path file = dir.resolve("cells" + frame + ".vtu");
+      w.write(
+          file,
+          List.of(new Field("c", 1, field(mesh, frame), "mol/m^3")),
+          List.of(new Field("error_indicator", 1, e, "mol/m^3")));
+      VtuGrid g = VtuReader.read(file);
+      assertArrayEquals(doubles ? e : asFloat32(e), g.cellField("error_indicator"));
+      double[] groups = g.cellField("group");
+      for (int t = 0; t < mesh.tetCount(); t++) {
+        assertEquals(mesh.tetGroup(t), groups[t], 0);
+      }
+      assertArrayEquals(mesh.copyCoordinates(), g.points()); // the copied mesh block still fits
+      VtuTestReader t = VtuTestReader.read(file);
+      assertArrayEquals(doubles ? e : asFloat32(e), t.get("CellData/error_indicator").values());
+    }
+    double[] wrong = new double[mesh.tetCount() - 1];
+    assertThrows(
+        IllegalArgumentException.class,
+        () -> w.write(dir.resolve("x.vtu"), List.of(), List.of(new Field("e", 1, wrong))));
+    double[] right = new double[mesh.tetCount()];
+    assertThrows(
+        IllegalArgumentException.class,
+        () -> w.write(dir.resolve("y.vtu"), List.of(), List.of(new Field("group", 1, right))));
+  }
+
+  @ParameterizedTest
   @CsvSource({"false,false,1", "true,false,1", "false,true,1", "true,true,1", "false,true,2"})
   void framesReadBackByBothReadersWithTheMeshExact(boolean doubles, boolean zlib, int order)
       throws Exception {

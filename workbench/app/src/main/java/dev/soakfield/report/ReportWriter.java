@@ -134,6 +134,7 @@ public final class ReportWriter {
       doc.heading("Curves").paragraph("No series.csv in the folder: the run wrote no steps.");
     }
     ThresholdSection.write(doc, summary, units.concentration());
+    AccuracySection.write(doc, summary);
     figures(doc, summary, series, units);
     warnings(doc, manifest, summary);
     pictures(doc, folder);
