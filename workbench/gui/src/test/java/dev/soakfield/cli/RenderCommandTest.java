@@ -154,7 +154,9 @@ class RenderCommandTest {
     CliRun field =
         CliRun.of("render", results.toString(), "--field", "rh", "--out", pic.toString());
     assertEquals(2, field.exitCode());
-    assertTrue(field.err().contains("found 'rh', expected c, phi or first_exceed"), field.err());
+    assertTrue(
+        field.err().contains("found 'rh', expected c, phi, first_exceed or trapped:<part>:<name>"),
+        field.err());
     CliRun folder = CliRun.of("render", dir.toString(), "--out", pic.toString());
     assertEquals(2, folder.exitCode());
     assertTrue(folder.err().contains("a folder without fields.pvd"), folder.err());
