@@ -15,6 +15,8 @@ final class DemoFiles {
     "sensor-pod.case.json",
     "sensor-pod-humid.case.json",
     "sensor-pod-bake.case.json",
+    // a sweep of the humid soak: two soak temperatures, solubility scattered from lot to lot
+    "sensor-pod-sweep.json",
     // the steel scenario of hydrogen work (demonstration data): pipe permeation, plate TDS
     "steel-pipe-h2.msh",
     "steel-pipe-h2.case.json",
