@@ -3,12 +3,11 @@ package dev.soakfield.fem.sweep;
 import dev.soakfield.fem.laws.SourceLawCatalog;
 import java.io.IOException;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
 import java.util.function.Consumer;
 
 /**
@@ -40,15 +39,19 @@ public final class LocalSweepEngine implements SweepEngine {
             scratch,
             SourceLawCatalog.load(settings.pluginFolders()).resolver(),
             Runtime.getRuntime().maxMemory() / workers);
-    ExecutorService pool = Executors.newFixedThreadPool(workers, LocalSweepEngine::daemon);
+    ExecutorService pool = Executors.newFixedThreadPool(workers, r -> daemon(r, "sweep-worker"));
+    // rows are stored durably (one fsync each) on a thread of their own, as Spark's driver does:
+    // a worker never waits for the disk, which otherwise bounds a sweep of small cases
+    ExecutorService rowWriter = Executors.newSingleThreadExecutor(r -> daemon(r, "sweep-rows"));
     try {
-      List<Future<?>> done = new ArrayList<>();
-      for (PlannedCase c : cases) {
-        done.add(pool.submit(() -> sink.accept(runner.run(c))));
+      CompletableFuture<?>[] done = new CompletableFuture<?>[cases.size()];
+      for (int i = 0; i < done.length; i++) {
+        PlannedCase c = cases.get(i);
+        done[i] =
+            CompletableFuture.supplyAsync(() -> runner.run(c), pool)
+                .thenAcceptAsync(sink, rowWriter);
       }
-      for (Future<?> f : done) {
-        f.get();
-      }
+      CompletableFuture.allOf(done).get();
     } catch (InterruptedException e) {
       Thread.currentThread().interrupt();
       throw new IOException("the sweep was interrupted", e);
@@ -63,12 +66,13 @@ public final class LocalSweepEngine implements SweepEngine {
       throw new IllegalStateException("a sweep worker failed", cause);
     } finally {
       pool.shutdownNow();
+      rowWriter.shutdown();
     }
     CaseRunner.deleteTree(scratch);
   }
 
-  private static Thread daemon(Runnable r) {
-    Thread t = new Thread(r, "sweep-worker");
+  private static Thread daemon(Runnable r, String name) {
+    Thread t = new Thread(r, name);
     t.setDaemon(true);
     return t;
   }

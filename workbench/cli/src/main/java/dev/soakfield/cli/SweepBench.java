@@ -1,5 +1,6 @@
 package dev.soakfield.cli;
 
+import dev.soakfield.fem.sweep.CaseRow;
 import dev.soakfield.fem.sweep.EngineSettings;
 import dev.soakfield.fem.sweep.SweepEngine;
 import dev.soakfield.fem.sweep.SweepEngines;
@@ -31,8 +32,7 @@ import picocli.CommandLine.Spec;
     name = "sweep",
     mixinStandardHelpOptions = true,
     description = {
-      "Runs a Monte Carlo sweep of a small plane sheet (a box of 40 cells across, D log-normal)"
-          + " one case after another, then with the local engine (a worker per core), then with"
+      "Runs a Monte Carlo sweep of a plane sheet (D log-normal) one case after another, then with the local engine (a worker per core), then with"
           + " the Spark engine in local mode when it is on the class path (through ./soakfield"
           + " bench sweep --engine spark); prints cases per minute and the ratios: a warm-up round"
           + " of every engine, then two rounds in turn, the best of each engine counting."
@@ -44,6 +44,16 @@ final class SweepBench implements Callable<Integer> {
   int cases;
 
   @Option(
+      names = "--cells",
+      defaultValue = "14",
+      description = {
+        "Cells across a cube of sheet (6 tetrahedra a cell; default 14, some 16,000"
+            + " tetrahedra, about 0.1 s a case); 0: a strip of 40 cells (240 tetrahedra),"
+            + " which measures the cost per case around the solve."
+      })
+  int cells;
+
+  @Option(
       names = "--engine",
       defaultValue = "local",
       description = "local, or spark to add the Spark engine in local mode.")
@@ -53,6 +63,10 @@ final class SweepBench implements Callable<Integer> {
   public Integer call() throws Exception {
     if (cases < 2) {
       throw new UserInputException("--cases: found " + cases + ", expected 2 or more");
+    }
+    if (cells < 0 || cells == 1 || cells > 60) {
+      throw new UserInputException(
+          "--cells: found " + cells + ", expected 0 (the strip) or 2 to 60");
     }
     PrintWriter out = spec.commandLine().getOut();
     int cores = Runtime.getRuntime().availableProcessors();
@@ -76,12 +90,14 @@ final class SweepBench implements Callable<Integer> {
       // a warm-up round of every engine, then rounds in turn: the JIT and the machine's load
       // favour no engine for running later; each engine's best round counts
       double[] best = new double[passes.size()];
+      double[] inCase = new double[passes.size()];
       java.util.Arrays.fill(best, Double.POSITIVE_INFINITY);
       for (int round = 0; round <= ROUNDS; round++) {
         for (int i = 0; i < passes.size(); i++) {
-          double s = seconds(plan, passes.get(i), dir.resolve(round + "-" + i));
-          if (round > 0) {
-            best[i] = Math.min(best[i], s);
+          Timing t = time(plan, passes.get(i), dir.resolve(round + "-" + i));
+          if (round > 0 && t.wall() < best[i]) {
+            best[i] = t.wall();
+            inCase[i] = t.inCases();
           }
         }
       }
@@ -89,7 +105,7 @@ final class SweepBench implements Callable<Integer> {
           Locale.ROOT,
           "%d cases of a %d-tetrahedron sheet, %d cores, best of %d rounds after a warm-up%n",
           cases,
-          40 * 6,
+          tets(),
           cores,
           ROUNDS);
       for (int i = 0; i < passes.size(); i++) {
@@ -109,7 +125,12 @@ final class SweepBench implements Callable<Integer> {
                         best[1] / best[i],
                         (best[i] - best[1]) / cases * 1000 * cores);
         out.printf(
-            Locale.ROOT, "  %-44s %8.1f cases/min%s%n", passes.get(i).label(), perMinute, ratio);
+            Locale.ROOT,
+            "  %-44s %8.1f cases/min  %6.1f ms in a case%s%n",
+            passes.get(i).label(),
+            perMinute,
+            inCase[i] / cases * 1000,
+            ratio);
       }
       out.flush();
     } finally {
@@ -123,18 +144,38 @@ final class SweepBench implements Callable<Integer> {
   /** One engine set-up to time. */
   private record Pass(String label, SweepEngine engine, int workers, Optional<String> master) {}
 
-  /** Seconds for one sweep of every case into a fresh folder. */
-  private static double seconds(SweepPlan plan, Pass pass, Path out) throws IOException {
+  /** Wall-clock seconds of a sweep and the seconds its cases took, summed over the cases. */
+  private record Timing(double wall, double inCases) {}
+
+  /** One sweep of every case into a fresh folder; a failed case makes the rates meaningless. */
+  private static Timing time(SweepPlan plan, Pass pass, Path out) throws IOException {
     EngineSettings settings =
         new EngineSettings(out, plan.mesh(), List.of(), pass.workers(), pass.master(), line -> {});
     long start = System.nanoTime();
-    SweepRun.run(plan, pass.engine(), settings, false, false);
-    return (System.nanoTime() - start) * 1e-9;
+    SweepRun.Outcome outcome = SweepRun.run(plan, pass.engine(), settings, false, false);
+    double wall = (System.nanoTime() - start) * 1e-9;
+    if (!outcome.failures().isEmpty()) {
+      throw new IllegalStateException(
+          pass.label()
+              + ": case "
+              + outcome.failures().get(0).id()
+              + " "
+              + outcome.failures().get(0).status());
+    }
+    return new Timing(wall, outcome.table().rows().stream().mapToDouble(CaseRow::seconds).sum());
+  }
+
+  private int tets() {
+    return cells == 0 ? 40 * 6 : cells * cells * cells * 6;
   }
 
   private Path writeFiles(Path dir) throws IOException {
     MshWriter.write(
-        dir.resolve("sheet.msh"), StructuredMesher.box(1e-3, 1e-5, 1e-5, 40, 1, 1, 1), false);
+        dir.resolve("sheet.msh"),
+        cells == 0
+            ? StructuredMesher.box(1e-3, 1e-5, 1e-5, 40, 1, 1, 1)
+            : StructuredMesher.box(1e-3, 1e-3, 1e-3, cells, cells, cells, 1),
+        false);
     Files.writeString(
         dir.resolve("sheet.json"),
         """

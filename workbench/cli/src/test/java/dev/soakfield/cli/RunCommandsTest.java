@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.soakfield.fem.sweep.SweepFile;
+import dev.soakfield.fem.sweep.SweepPlan;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
@@ -25,6 +27,9 @@ class RunCommandsTest {
     // conservation is exact for linear elements up to solver round-off (common practice: 1e-10)
     assertTrue(summary.get("balance").get("relative").asDouble() < 1e-10, summary.toString());
     assertTrue(Files.readAllLines(results.resolve("series.csv")).size() > 10);
+    // the sweep scenario beside it reads against the copied base case: 2 temperatures x 6 lots
+    SweepPlan sweep = SweepPlan.of(SweepFile.read(dir.resolve("demo/case/sensor-pod-sweep.json")));
+    assertEquals(12, sweep.cases().size());
   }
 
   @Test

@@ -156,12 +156,17 @@ class SweepCommandTest {
 
   @Test
   void benchSweepPrintsCasesPerMinuteAndTheRatio() {
-    CliRun r = CliRun.of("bench", "sweep", "--cases", "2");
+    CliRun r = CliRun.of("bench", "sweep", "--cases", "2", "--cells", "0");
     assertEquals(0, r.exitCode(), r.err());
     assertTrue(r.out().contains("one after another (local engine, 1 worker)"), r.out());
     assertTrue(
-        r.out().matches("(?s).*local engine, \\d+ workers +[0-9.]+ cases/min +[0-9.]+x.*"),
+        r.out()
+            .matches(
+                "(?s).*local engine, \\d+ workers +[0-9.]+ cases/min +[0-9.]+ ms in a case +[0-9.]+x.*"),
         r.out());
     assertEquals(2, CliRun.of("bench", "sweep", "--cases", "1").exitCode());
+    CliRun oneCell = CliRun.of("bench", "sweep", "--cells", "1");
+    assertEquals(2, oneCell.exitCode());
+    assertTrue(oneCell.err().contains("--cells: found 1, expected 0 (the strip) or 2 to 60"));
   }
 }

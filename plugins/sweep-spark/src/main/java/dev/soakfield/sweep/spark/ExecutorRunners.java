@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import org.apache.spark.SparkFiles;
 
 /**
  * The case runner of the sweep an executor works on, made once per executor process: its mesh
@@ -20,7 +21,9 @@ final class ExecutorRunners {
   private ExecutorRunners() {}
 
   static synchronized CaseRunner forSweep(SweepJob job, ShippedFiles files) {
-    Object key = java.util.List.of(job, files);
+    // the shipped files' folder belongs to one Spark context: a later sweep in the same process
+    // (a bench, a test) finds its files elsewhere even when their names are the same
+    Object key = java.util.List.of(job, files, SparkFiles.getRootDirectory());
     if (runner == null || !key.equals(current)) {
       try {
         Path scratch = Files.createTempDirectory("soakfield-sweep-");

@@ -131,6 +131,31 @@ class SparkEngineTest {
     }
   }
 
+  /**
+   * A second sweep in the same process under a new Spark context (a bench, the tests): the files of
+   * the first context are gone, and the cached case runner must not point at them.
+   */
+  @Test
+  void aLaterSparkContextInTheSameProcessRunsItsOwnFiles() throws IOException {
+    SparkSession first = SparkSessions.local();
+    try {
+      run(SweepEngines.named("spark"), "spark-first", Optional.of("local[2]"));
+    } finally {
+      first.stop();
+    }
+    SparkSession second = SparkSessions.local();
+    try {
+      SweepRun.Outcome again =
+          run(SweepEngines.named("spark"), "spark-second", Optional.of("local[2]"));
+      assertEquals(5, again.failures().size(), again.failures().toString());
+      assertEquals(
+          Files.readString(dir.resolve("spark-first/cases.csv")),
+          Files.readString(dir.resolve("spark-second/cases.csv")));
+    } finally {
+      second.stop();
+    }
+  }
+
   @Test
   void casesCrossingProcessBoundariesGiveTheSameTable() throws IOException {
     SparkSession s = SparkSessions.localCluster();
