@@ -9,6 +9,9 @@ import dev.soakfield.fem.assembly.CsrMatrix;
  * off-diagonal entries of A_F are also the strong-connection graph used for aggregation.
  */
 final class StrengthFilter {
+  /** The smallest share of a row's diagonal that lumping may leave. */
+  static final double KEPT_DIAGONAL = 0.25;
+
   private StrengthFilter() {}
 
   /** A_F of {@code a} (diagonal {@code diagonal}) for threshold ε; rows keep A's column order. */
@@ -30,6 +33,12 @@ final class StrengthFilter {
               if (j != i && v * v < eps2 * diagonal[i] * diagonal[j]) {
                 lumped += v;
               }
+            }
+            if (!(lumped >= KEPT_DIAGONAL * diagonal[i])) {
+              // positive weak entries (quadratic elements, a consistent capacity that outweighs
+              // diffusion) would take the diagonal to zero or below, and the prolongator's D⁻¹
+              // to NaN: such a row keeps its own diagonal
+              lumped = diagonal[i];
             }
             for (int k = rowStart[i]; k < rowStart[i + 1]; k++) {
               int j = cols[k];

@@ -8,14 +8,19 @@ import dev.soakfield.mesh.gen.StructuredMesher;
 import java.util.Arrays;
 
 /**
- * The step matrix a run solves, for benchmarks: M + dt·K of linear tetrahedra on the unit box of
+ * The step matrix a run solves, for benchmarks and tests: M + dt·K of tetrahedra on the unit box of
  * cells³ cells (six tetrahedra each), D = S = 1, consistent capacity, no face held, dt = ratio·h².
  */
 final class TetSystem {
   private TetSystem() {}
 
   static CsrMatrix build(int cells, double ratio) {
-    TetMesh mesh = StructuredMesher.box(1, 1, 1, cells, cells, cells, 1);
+    return build(cells, ratio, 1);
+  }
+
+  /** As above with linear (1) or quadratic (2) tetrahedra. */
+  static CsrMatrix build(int cells, double ratio, int order) {
+    TetMesh mesh = StructuredMesher.box(1, 1, 1, cells, cells, cells, order);
     SystemAssembler asm = new SystemAssembler(FeSpace.of(mesh));
     int tets = mesh.tetCount();
     double[] ones = new double[tets];
