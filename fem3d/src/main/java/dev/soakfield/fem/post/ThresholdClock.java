@@ -51,13 +51,14 @@ public final class ThresholdClock {
 
   /** Records the step from t − dt to t that ended at potential phi. */
   public void step(double t, double dt, double[] phi) {
-    double[] c = concentration(phi);
-    for (int i = 0; i < c.length; i++) {
-      if (firstTime[i] < 0 && c[i] >= threshold) {
-        firstTime[i] = crossing(t - dt, previousC[i], t, c[i], threshold);
+    // in place, node by node: a new vector a step is a humongous allocation to G1 at scale
+    for (int i = 0; i < phi.length; i++) {
+      double c = nodalSolubility[i] * phi[i];
+      if (firstTime[i] < 0 && c >= threshold) {
+        firstTime[i] = crossing(t - dt, previousC[i], t, c, threshold);
       }
+      previousC[i] = c;
     }
-    previousC = c;
   }
 
   /** Where the straight line from (t0, v0) to (t1, v1) reaches level, clamped to the step. */

@@ -30,6 +30,9 @@ final class EliminatedSystem {
   // Prescribed rows keep their own diagonal (x_i = φ_D scaled by it), so they do not dominate ‖b‖
   // and the solver's relative tolerance stays meaningful for the free rows.
   private final double[] prescribedDiagonal;
+  // work vectors of the right-hand side with held values, kept between steps
+  private double[] heldValues;
+  private double[] reducedRhs;
   private final PcgSolver solver;
   private boolean solverHasSystem;
   private int expectedSolves = 1;
@@ -172,19 +175,22 @@ final class EliminatedSystem {
    * over.
    */
   private double[] eliminatedRhs(double[] fullRhs, double[] phi1) {
-    double[] phiD = new double[n];
-    for (int i = 0; i < n; i++) {
-      if (boundary.isPrescribed[i]) {
-        phiD[i] = phi1[i];
-      }
+    if (boundary.prescribed.isEmpty()) {
+      return fullRhs; // nothing to eliminate (the solver only reads it)
     }
-    double[] aDphiD = new double[n];
-    if (!boundary.prescribed.isEmpty()) {
-      unreduced.multiply(phiD, aDphiD);
+    if (heldValues == null) {
+      // kept between steps: at scale a new vector a step is a humongous allocation to G1
+      heldValues = new double[n];
+      reducedRhs = new double[n];
     }
-    double[] b = new double[n];
+    double[] phiD = heldValues;
     for (int i = 0; i < n; i++) {
-      b[i] = boundary.isPrescribed[i] ? prescribedDiagonal[i] * phi1[i] : fullRhs[i] - aDphiD[i];
+      phiD[i] = boundary.isPrescribed[i] ? phi1[i] : 0.0;
+    }
+    double[] b = reducedRhs;
+    unreduced.multiply(phiD, b);
+    for (int i = 0; i < n; i++) {
+      b[i] = boundary.isPrescribed[i] ? prescribedDiagonal[i] * phi1[i] : fullRhs[i] - b[i];
     }
     return b;
   }

@@ -7,6 +7,7 @@ import dev.soakfield.fem.assembly.CsrMatrix;
 import dev.soakfield.fem.assembly.SystemAssembler;
 import dev.soakfield.fem.model.DiffusionModel;
 import dev.soakfield.fem.solve.SolverStalledException;
+import java.util.Arrays;
 
 /**
  * One step of the theta scheme for the conservative balance d(M(T)φ)/dt + L(t) φ = f(t) + q(φ):
@@ -30,6 +31,7 @@ public final class ThetaStepper {
   private final DiffusionModel model;
   private final SystemAssembler asm;
   private final int n;
+  private final StepBuffers buffers;
   private final BoundarySets boundary;
   private final double[] constantLoad;
   private final LawSources laws;
@@ -52,6 +54,7 @@ public final class ThetaStepper {
     this.model = model;
     asm = new SystemAssembler(model.space());
     this.n = model.space().dofCount();
+    buffers = new StepBuffers(n);
     constantLoad = new double[n];
     if (model.hasConstantSource()) {
       asm.addVolumeLoad(constantLoad, model.constantRate(), 1.0);
@@ -278,32 +281,36 @@ public final class ThetaStepper {
     double t1 = t0 + dt;
     // M₀ is the capacity the previous step ended with (left limit at t0): conservative when S jumps
     CoefficientCache.Coefficients c0 = coefficients.at(t0);
-    double[] work = new double[n];
-    double[] rhs = new double[n];
+    // the step's work vectors are kept from step to step: at a million nodes each is a "humongous"
+    // object to G1, and allocating ten of them a step started a concurrent collection every step
+    double[] work = buffers.work;
+    double[] rhs = buffers.rhs;
     c0.capacity.multiply(phi0, rhs);
     if (theta < 1.0) {
-      double[] l0 = new double[n];
+      double[] l0 = buffers.explicitPart();
       applyL(c0, phi0, t0, l0, work);
-      double[] f0 = new double[n];
+      double[] f0 = work; // free again once L₀φ₀ is formed
       load(c0, t0, f0);
       for (int i = 0; i < n; i++) {
         rhs[i] += -(1 - theta) * dt * l0[i] + (1 - theta) * dt * f0[i];
       }
     }
     CoefficientCache.Coefficients c1 = coefficients.at(t1);
-    double[] f1 = new double[n];
+    double[] f1 = work;
     load(c1, t1, f1);
     for (int i = 0; i < n; i++) {
       rhs[i] += theta * dt * f1[i];
     }
-    double[] fullRhs = rhs.clone();
+    // the solves only read the right-hand side: the inflow below reads it after them
+    double[] fullRhs = rhs;
 
     double[] phi1 = phi0.clone();
     applyPrescribed(phi1, t1);
     long solveStart = System.nanoTime();
     system.prepare(c1, dt, theta, t1);
     double kelvin = temperatureAt(t1);
-    double[] q = new double[n];
+    double[] q = buffers.rates;
+    Arrays.fill(q, 0.0);
     int iterations;
     int newtonIterations = 0;
     if (laws.isEmpty() && faceLaws.isEmpty()) {
@@ -317,7 +324,7 @@ public final class ThetaStepper {
 
     double[] inflow = new double[boundary.faceGroupCount];
     if (!boundary.prescribed.isEmpty()) {
-      double[] r = new double[n];
+      double[] r = buffers.work;
       system.multiplyUnreduced(phi1, r);
       for (int i = 0; i < n; i++) {
         if (boundary.isPrescribed[i] && !onExchangeFace[i]) {
@@ -357,5 +364,26 @@ public final class ThetaStepper {
    */
   public double[] lastNewtonResiduals() {
     return newton.lastResiduals();
+  }
+
+  /** Work vectors of one step, reused by the next; nothing in them outlives the step. */
+  private static final class StepBuffers {
+    final double[] work;
+    final double[] rhs;
+    final double[] rates;
+    private double[] explicitPart; // L₀φ₀: only with θ < 1
+
+    StepBuffers(int n) {
+      work = new double[n];
+      rhs = new double[n];
+      rates = new double[n];
+    }
+
+    double[] explicitPart() {
+      if (explicitPart == null) {
+        explicitPart = new double[rhs.length];
+      }
+      return explicitPart;
+    }
   }
 }
