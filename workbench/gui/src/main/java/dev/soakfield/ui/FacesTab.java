@@ -11,10 +11,13 @@ import dev.soakfield.app.setup.FaceSelection;
 import dev.soakfield.app.setup.GroupEdits;
 import dev.soakfield.app.setup.KindColours;
 import dev.soakfield.app.setup.SetupSession;
+import dev.soakfield.fem.laws.FaceLawEntry;
+import dev.soakfield.law.api.LawParameter;
 import dev.soakfield.mesh.FaceGroup;
 import dev.soakfield.mesh.FaceGroupKind;
 import dev.soakfield.report.TimeAxis;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.function.Supplier;
 
@@ -105,12 +108,63 @@ final class FacesTab extends SetupTab {
               : kind.equals("exchange") ? "environment concentration" : "held concentration";
       value(d, faces, chosen, "value", unit, check);
     }
+    if (kind.equals("law")) {
+      faceLaw(faces, chosen);
+    }
     if (kind.equals("ambient")) {
       nk_layout_row_dynamic(ctx, 34, 1);
       nk_label_wrap(ctx, "takes the exposure's potential (see Exposure): nothing to set here");
     }
     for (String g : chosen) {
       check.ifPresent(c -> w.problems(c.about(FaceEdits.path(g))));
+    }
+  }
+
+  /** A face law from the catalog (built-in and plugins) and its parameters, with their units. */
+  private void faceLaw(FaceEdits faces, List<String> chosen) {
+    var ctx = w.ctx();
+    String first = chosen.get(0);
+    String law = faces.entry(first).path("law").asText("");
+    nk_layout_row_dynamic(ctx, 20, 1);
+    nk_label(ctx, "face law: " + (law.isEmpty() ? "none chosen" : law), NK_TEXT_LEFT);
+    nk_layout_row_dynamic(ctx, 22, 2);
+    for (FaceLawEntry entry : session.get().catalog().faceEntries()) {
+      String id = entry.provider().id();
+      if (w.button("face law " + id, id)) {
+        faces.faceLaw(chosen, id, entry.provider().parameters());
+      }
+    }
+    Optional<FaceLawEntry> entry = session.get().catalog().findFace(law);
+    if (entry.isEmpty()) {
+      return;
+    }
+    nk_layout_row_dynamic(ctx, 34, 1);
+    nk_label_wrap(ctx, entry.get().provider().description());
+    nk_layout_row_dynamic(ctx, 18, 1);
+    nk_label(
+        ctx, "gas pressure [Pa], for laws that use one; default: the exposure's", NK_TEXT_LEFT);
+    w.labelled(
+            "  value", "face pressure", CaseValues.text(faces.entry(first).path("pressure")), 0.35f)
+        .ifPresent(t -> faces.value(chosen, "pressure", t));
+    for (LawParameter p : entry.get().provider().parameters()) {
+      nk_layout_row_dynamic(ctx, 18, 1);
+      nk_label(
+          ctx,
+          String.format(
+              Locale.ROOT,
+              "%s [%s] %s, %s…%s",
+              p.name(),
+              p.unit(),
+              p.isRequired() ? "required" : "default " + p.defaultValue(),
+              p.minimum(),
+              p.maximum()),
+          NK_TEXT_LEFT);
+      w.labelled(
+              "  value",
+              "face law " + p.name(),
+              CaseValues.text(faces.entry(first).path(p.name())),
+              0.35f)
+          .ifPresent(t -> faces.value(chosen, p.name(), t));
     }
   }
 

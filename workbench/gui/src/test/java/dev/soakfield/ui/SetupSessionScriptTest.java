@@ -260,6 +260,29 @@ class SetupSessionScriptTest {
   }
 
   @Test
+  void aFaceLawIsChosenFromTheCatalogAndItsParametersTypedInTheFacesTab() throws Exception {
+    GlAvailable.orSkip();
+    Path mesh = dir.resolve("plate.msh");
+    MshWriter.write(mesh, StructuredMesher.box(0.01, 0.01, 0.002, 2, 2, 1, 1), false);
+    SetupSession session = SetupSession.open(mesh, SourceLawCatalog.classPathOnly());
+    GlSurface surface = GlSurface.offscreen(1400, 860);
+    try (Workbench wb = new Workbench(surface, session)) {
+      session.selection().click("zmin");
+      wb.frame();
+      press(wb, "law");
+      assertTrue(wb.widget("face law cathodic-charging").isPresent(), "the catalog's face laws");
+      press(wb, "face law cathodic-charging");
+      type(wb, "face law current-density", "5");
+      var zmin = session.draft().get().tree().path("faces").path("zmin");
+      assertEquals("law", zmin.path("kind").asText());
+      assertEquals("cathodic-charging", zmin.path("law").asText());
+      assertEquals(5.0, zmin.path("current-density").asDouble());
+      assertEquals(1.0, zmin.path("efficiency").asDouble()); // the optional default
+      shot(wb, "faces-tab-face-law");
+    }
+  }
+
+  @Test
   void aHandWrittenCaseOpensShowsItsValuesAndAsksBeforeItsCommentsGo() throws Exception {
     GlAvailable.orSkip();
     MshWriter.write(

@@ -38,8 +38,10 @@ public record DraftCheck(
       warnings.addAll(CaseChecks.againstMesh(spec, mesh));
       boolean binds =
           spec.initial().from().isPresent()
-              || spec.materials().values().stream().anyMatch(m -> !m.laws().isEmpty());
-      if (binds) { // building the model is the only full check of laws and restart folders
+              || spec.materials().values().stream().anyMatch(m -> !m.laws().isEmpty())
+              || spec.faces().values().stream().anyMatch(f -> f.law().isPresent());
+      if (binds) { // building the model is the only full check of laws (source and face) and
+        // restarts
         warnings.addAll(RunPipeline.bindAll(new RunPipeline.Prepared(spec, mesh, warnings), laws));
       }
       return new DraftCheck(List.of(), warnings, Optional.of(spec));

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.soakfield.fem.physics.FaceKind;
+import dev.soakfield.law.api.LawParameter;
 import java.util.Collection;
 import java.util.List;
 
@@ -77,6 +78,31 @@ public final class FaceEdits {
             if (tree.path("faces") instanceof ObjectNode faces) {
               faces.remove(g);
             }
+          }
+        });
+  }
+
+  /**
+   * Gives the groups the face law {@code lawId} with the defaults of its optional parameters (the
+   * required ones are left for the user: the check names them). A face-level gas pressure the
+   * groups had is kept.
+   */
+  public void faceLaw(Collection<String> groups, String lawId, List<LawParameter> parameters) {
+    draft.edit(
+        "face law " + lawId + " on " + String.join(", ", groups),
+        tree -> {
+          for (String g : groups) {
+            JsonNode old = path(g).in(tree);
+            ObjectNode e = F.objectNode().put("kind", FaceKind.LAW.word()).put("law", lawId);
+            if (old.has("pressure")) {
+              e.set("pressure", old.get("pressure").deepCopy());
+            }
+            for (LawParameter lp : parameters) {
+              if (!lp.isRequired()) {
+                e.put(lp.name(), lp.defaultValue());
+              }
+            }
+            path(g).set(tree, e);
           }
         });
   }
@@ -165,6 +191,7 @@ public final class FaceEdits {
         FaceKind.FLUX,
         FaceKind.EXCHANGE,
         FaceKind.AMBIENT,
+        FaceKind.LAW,
         FaceKind.SEALED);
   }
 

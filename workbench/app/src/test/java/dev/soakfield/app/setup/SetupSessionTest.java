@@ -135,6 +135,28 @@ class SetupSessionTest {
   }
 
   @Test
+  void aFaceLawComesFromTheCatalogWithItsDefaultsAndTheCheckNamesWhatIsMissing()
+      throws IOException {
+    SetupSession s = setUp();
+    CaseDraft d = s.draft().orElseThrow();
+    FaceEdits f = new FaceEdits(d);
+    assertTrue(FaceEdits.kindWords().contains("law"), FaceEdits.kindWords().toString());
+    f.kind(List.of("xmin"), FaceKind.LAW);
+    List<String> noLaw = s.check().orElseThrow().about(FaceEdits.path("xmin"));
+    assertFalse(noLaw.isEmpty(), "a law kind without a law must be refused");
+    var cathodic = LAWS.findFace("cathodic-charging").orElseThrow();
+    f.faceLaw(List.of("xmin"), "cathodic-charging", cathodic.provider().parameters());
+    assertEquals("law", f.kindOf("xmin"));
+    assertEquals("cathodic-charging", f.entry("xmin").path("law").asText());
+    assertEquals(1.0, f.entry("xmin").path("efficiency").asDouble()); // the optional default
+    List<String> missing =
+        s.check().orElseThrow().about(FaceEdits.path("xmin").child("current-density"));
+    assertEquals(List.of("found nothing, expected a value in A/m^2 (required)"), missing);
+    f.value(List.of("xmin"), "current-density", "10");
+    assertEquals(List.of(), s.check().orElseThrow().about(FaceEdits.path("xmin")));
+  }
+
+  @Test
   void facesAreColouredByKindWithUnsetExteriorGroupsStandingOut() throws IOException {
     SetupSession s = SetupSession.open(box(), LAWS);
     CaseDraft d = s.draft().orElseThrow();
