@@ -17,7 +17,6 @@ import dev.soakfield.mesh.FaceGroup;
 import dev.soakfield.mesh.FaceGroupKind;
 import dev.soakfield.report.TimeAxis;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import java.util.function.Supplier;
 
@@ -147,23 +146,7 @@ final class FacesTab extends SetupTab {
             "  value", "face pressure", CaseValues.text(faces.entry(first).path("pressure")), 0.35f)
         .ifPresent(t -> faces.value(chosen, "pressure", t));
     for (LawParameter p : entry.get().provider().parameters()) {
-      nk_layout_row_dynamic(ctx, 18, 1);
-      nk_label(
-          ctx,
-          String.format(
-              Locale.ROOT,
-              "%s [%s] %s, %s…%s",
-              p.name(),
-              p.unit(),
-              p.isRequired() ? "required" : "default " + p.defaultValue(),
-              p.minimum(),
-              p.maximum()),
-          NK_TEXT_LEFT);
-      w.labelled(
-              "  value",
-              "face law " + p.name(),
-              CaseValues.text(faces.entry(first).path(p.name())),
-              0.35f)
+      w.lawParameter(p, "face law " + p.name(), CaseValues.text(faces.entry(first).path(p.name())))
           .ifPresent(t -> faces.value(chosen, p.name(), t));
     }
   }

@@ -203,19 +203,7 @@ final class PartsTab extends SetupTab {
     nk_layout_row_dynamic(ctx, 34, 1);
     nk_label_wrap(ctx, entry.provider().description());
     for (LawParameter p : entry.provider().parameters()) {
-      nk_layout_row_dynamic(ctx, 18, 1);
-      nk_label(
-          ctx,
-          String.format(
-              Locale.ROOT,
-              "%s [%s] %s, %s…%s",
-              p.name(),
-              p.unit(),
-              p.isRequired() ? "required" : "default " + p.defaultValue(),
-              p.minimum(),
-              p.maximum()),
-          NK_TEXT_LEFT);
-      w.labelled("  value", "law " + p.name(), CaseValues.text(source.path(p.name())), 0.35f)
+      w.lawParameter(p, "law " + p.name(), CaseValues.text(source.path(p.name())))
           .ifPresent(t -> m.value(part, TreePath.of("source", p.name()), t));
     }
   }

@@ -2,10 +2,12 @@ package dev.soakfield.ui;
 
 import static org.lwjgl.nuklear.Nuklear.*;
 
+import dev.soakfield.law.api.LawParameter;
 import java.nio.ByteBuffer;
 import java.nio.charset.StandardCharsets;
 import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import org.lwjgl.nuklear.NkColor;
@@ -152,6 +154,26 @@ final class Widgets implements AutoCloseable {
   }
 
   /** Whether any text field has the keyboard (shortcut letters then go to the field). */
+  /**
+   * A law parameter's heading (name, unit, required or its default, range) and its value field;
+   * returns the text typed into it.
+   */
+  Optional<String> lawParameter(LawParameter p, String id, String current) {
+    nk_layout_row_dynamic(ctx, 18, 1);
+    nk_label(
+        ctx,
+        String.format(
+            Locale.ROOT,
+            "%s [%s] %s, %s…%s",
+            p.name(),
+            p.unit(),
+            p.isRequired() ? "required" : "default " + p.defaultValue(),
+            p.minimum(),
+            p.maximum()),
+        NK_TEXT_LEFT);
+    return labelled("  value", id, current, 0.35f);
+  }
+
   boolean typing() {
     return active != null;
   }
