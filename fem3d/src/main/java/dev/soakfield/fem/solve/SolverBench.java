@@ -13,7 +13,7 @@ import no.uib.cipr.matrix.sparse.IterativeSolverNotConvergedException;
 /**
  * Measures, in one run, the sparse product against the machine's memory bandwidth and our PCG
  * (Jacobi, AMG) against stock MTJ (CG with its diagonal preconditioner on its CompRowMatrix), on
- * the matrix a run solves: M + dt·K of linear tetrahedra on a box of (gridN − 1)³ cells, six
+ * the matrix a run solves: M + dt·K of tetrahedra on a box of (gridN − 1)³ cells (linear), six
  * tetrahedra each (the structured mesher's), D = 1, at step ratios dt·D/h² of 1 and 100. Figures
  * are best-of-several after warm-up runs (the first runs include JIT compilation).
  *
@@ -33,13 +33,30 @@ public final class SolverBench {
 
   /** Prints the figures to {@code out}; gridN = 65 (64³ cells) gives 274,625 rows. */
   public static void run(PrintWriter out, int gridN) {
+    run(out, gridN, 1);
+  }
+
+  /**
+   * As above with linear (order 1) or quadratic (order 2: (gridN − 1)/2 cells a side, gridN odd)
+   * tetrahedra; also prints what the automatic choice takes against what the run measured.
+   */
+  public static void run(PrintWriter out, int gridN, int order) {
     if (gridN < 8 || gridN > 200) {
       throw new IllegalArgumentException("grid size must lie in [8, 200], got " + gridN);
     }
+    if (order != 1 && !(order == 2 && gridN % 2 == 1)) {
+      throw new IllegalArgumentException(
+          "order "
+              + order
+              + " with "
+              + gridN
+              + " nodes a side: expected 1, or 2 with an odd count");
+    }
+    int cells = (gridN - 1) / order;
     int threads = RowSlices.slicesFor(Integer.MAX_VALUE);
     double triad = triadBytesPerSecond(threads);
     out.printf(Locale.ROOT, "STREAM triad, %d threads: %.1f GB/s%n", threads, triad * 1e-9);
-    CsrMatrix a = TetSystem.build(gridN - 1, 1.0);
+    CsrMatrix a = TetSystem.build(cells, 1.0, order);
     double spmv = spmvSeconds(a);
     double bytes = 12.0 * a.nonZeros() + 20.0 * a.size();
     out.printf(
@@ -52,7 +69,7 @@ public final class SolverBench {
         100 * bytes / spmv / triad);
     double iterationFloor = (bytes + FUSED_VECTOR_BYTES_PER_ROW * a.size()) / triad;
     for (double ratio : new double[] {1.0, 100.0}) {
-      CsrMatrix m = ratio == 1.0 ? a : TetSystem.build(gridN - 1, ratio);
+      CsrMatrix m = ratio == 1.0 ? a : TetSystem.build(cells, ratio, order);
       double[] b = new double[m.size()];
       for (int i = 0; i < b.length; i++) {
         b[i] = 1.0 + 0.5 * Math.sin(0.01 * i);
@@ -80,8 +97,21 @@ public final class SolverBench {
           amg[1] / mtj[1],
           amg[2],
           (amg[1] + amg[2]) / mtj[1]);
+      for (int solves : new int[] {1, 100}) {
+        PreconditionerKind chosen = PreconditionerChoice.choose(m, m.diagonal(), solves, TOLERANCE);
+        PreconditionerKind faster =
+            solves * jacobi[1] <= amg[2] + solves * amg[1]
+                ? PreconditionerKind.JACOBI
+                : PreconditionerKind.AMG;
+        out.printf(
+            Locale.ROOT,
+            "  over %3d solves: the choice takes %s, the faster here is %s%n",
+            solves,
+            chosen,
+            faster);
+      }
     }
-    AmgHierarchy h = AmgHierarchy.build(TetSystem.build(gridN - 1, 100.0));
+    AmgHierarchy h = AmgHierarchy.build(TetSystem.build(cells, 100.0, order));
     out.printf(
         Locale.ROOT,
         "AMG levels (ratio 100): %s, operator complexity %.2f%n",

@@ -27,12 +27,28 @@ final class SolverBenchCommand implements Callable<Integer> {
           "Nodes per axis of the test box (65: 64³ cells, 1.57M tetrahedra, 274,625 rows).")
   int grid;
 
+  @Option(
+      names = "--order",
+      defaultValue = "1",
+      description =
+          "Element order: 1 (4-node) or 2 (10-node tetrahedra; --grid odd, (grid-1)/2 cells a"
+              + " side, the same rows).")
+  int order;
+
   @Override
   public Integer call() {
     if (grid < 4) {
       throw new UserInputException("--grid: found " + grid + ", expected at least 4");
     }
-    SolverBench.run(spec.commandLine().getOut(), grid);
+    if (order != 1 && !(order == 2 && grid % 2 == 1)) {
+      throw new UserInputException(
+          "--order: found "
+              + order
+              + " with --grid "
+              + grid
+              + ", expected 1, or 2 with an odd grid");
+    }
+    SolverBench.run(spec.commandLine().getOut(), grid, order);
     spec.commandLine().getOut().flush();
     return ExitCodes.OK;
   }

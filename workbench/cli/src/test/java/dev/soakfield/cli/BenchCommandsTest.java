@@ -49,5 +49,23 @@ class BenchCommandsTest {
     assertTrue(m.find(), r.out());
     assertTrue(Integer.parseInt(m.group(1)) > 4257, r.out());
     assertTrue(r.out().contains("x its floor"), r.out());
+    assertTrue(r.out().contains("over 100 solves: the choice takes"), r.out());
+  }
+
+  @Test
+  void theSolverBenchTakesQuadraticElementsWithTheSameRows() {
+    CliRun r = CliRun.of("bench", "solver", "--grid", "9", "--order", "2");
+    assertEquals(ExitCodes.OK, r.exitCode(), r.err());
+    // 4³ cells of 10-node tetrahedra: 9 nodes a side, 729 rows; the quadratic stencil reaches
+    // more neighbours than the linear one on the same rows
+    Matcher m = Pattern.compile("SpMV 729 rows, (\\d+) nonzeros").matcher(r.out());
+    assertTrue(m.find(), r.out());
+    CliRun linear = CliRun.of("bench", "solver", "--grid", "9");
+    Matcher l = Pattern.compile("SpMV 729 rows, (\\d+) nonzeros").matcher(linear.out());
+    assertTrue(l.find(), linear.out());
+    assertTrue(Integer.parseInt(m.group(1)) > Integer.parseInt(l.group(1)), r.out());
+    CliRun even = CliRun.of("bench", "solver", "--grid", "10", "--order", "2");
+    assertEquals(2, even.exitCode());
+    assertTrue(even.err().contains("expected 1, or 2 with an odd grid"), even.err());
   }
 }
