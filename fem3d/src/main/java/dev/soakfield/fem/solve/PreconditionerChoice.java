@@ -19,18 +19,27 @@ import java.util.Arrays;
  * boxes at tol = 1e-11 the estimate was within 10 % (low) to 30 % (high) of the count.
  *
  * <p><b>AMG</b> took 6 to 14 iterations on the same boxes at every step ratio from 0.1 to 1000
- * ({@link #AMG_ITERATIONS} takes the top), each costing about six Jacobi iterations (a V-cycle's
- * two Gauss–Seidel sweeps, residual and transfers on 1.44 times the fine matrix's entries), and its
- * set-up as much as about 150 Jacobi iterations; all measured with {@code soakfield bench solver}
- * and the same boxes on the 2-core machine the project is developed on. AMG is chosen when its
- * set-up plus its iterations over the expected solves cost less than Jacobi's iterations.
+ * ({@link #AMG_ITERATIONS} takes the top), and 18 on quadratic tetrahedra (8³ cells: the same rows,
+ * about 28 entries a row against 15), 20.6 a step in a 100-step run of a 32³-cell quadratic box
+ * ({@link #AMG_ITERATIONS_WIDE_STENCIL}). An iteration costs about 8.5 Jacobi iterations (a
+ * V-cycle's Gauss–Seidel sweeps run on one thread; 8.8 measured on linear, 8.2 on quadratic
+ * elements at 274,625 rows), and the set-up as much as about 150 Jacobi iterations (136 and 91
+ * measured). All measured with {@code soakfield bench solver} on the 2-core machine the project is
+ * developed on. AMG is chosen when its set-up plus its iterations over the expected solves cost
+ * less than Jacobi's iterations.
  */
 final class PreconditionerChoice {
   /** AMG iterations per solve (the most measured, see above). */
   static final int AMG_ITERATIONS = 14;
 
+  /** AMG iterations per solve with quadratic elements' stencil (see above). */
+  static final int AMG_ITERATIONS_WIDE_STENCIL = 20;
+
+  /** Entries a row above which a stencil counts as wide (linear: about 15, quadratic: 28). */
+  static final double WIDE_STENCIL_ENTRIES = 20;
+
   /** Cost of one AMG-preconditioned iteration in Jacobi-preconditioned iterations (measured). */
-  static final double AMG_ITERATION_COST = 6;
+  static final double AMG_ITERATION_COST = 8.5;
 
   /** Cost of building the AMG hierarchy in Jacobi-preconditioned iterations (measured). */
   static final double AMG_SETUP_COST = 150;
@@ -48,8 +57,15 @@ final class PreconditionerChoice {
       CsrMatrix a, double[] diagonal, int expectedSolves, double tolerance) {
     double solves = Math.max(1, expectedSolves);
     double jacobi = solves * jacobiIterations(a, diagonal, tolerance);
-    double amg = AMG_SETUP_COST + solves * AMG_ITERATIONS * AMG_ITERATION_COST;
+    double amg = AMG_SETUP_COST + solves * amgIterations(a) * AMG_ITERATION_COST;
     return amg < jacobi ? PreconditionerKind.AMG : PreconditionerKind.JACOBI;
+  }
+
+  /** AMG iterations per solve expected for this matrix's stencil (see the class comment). */
+  static int amgIterations(CsrMatrix a) {
+    return a.nonZeros() > WIDE_STENCIL_ENTRIES * a.size()
+        ? AMG_ITERATIONS_WIDE_STENCIL
+        : AMG_ITERATIONS;
   }
 
   /** Estimated Jacobi-PCG iterations to {@code tolerance} (see the class comment). */
