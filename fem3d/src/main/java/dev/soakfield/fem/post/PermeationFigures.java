@@ -17,7 +17,8 @@ import java.util.Map;
  * @param area the group's area, m²
  * @param steadyFlux J_ss per unit area, NaN when the flux did not become steady
  * @param timeLag t_lag, s (NaN when not steady)
- * @param breakthrough the first time the flux reached {@code share}·J_ss, s (NaN when not steady)
+ * @param breakthrough the first time the flux reached {@code share}·J_ss, s (NaN when not steady,
+ *     and for an entry face)
  * @param share the breakthrough share of the steady flux
  */
 public record PermeationFigures(
@@ -72,7 +73,9 @@ public record PermeationFigures(
     double lag = end - sign * cumulative[n - 1] / (area * jEnd);
     double breakthrough = Double.NaN;
     double level = share * jEnd;
-    for (int i = 1; i < n; i++) {
+    // breakthrough is an exit face's figure: an entry face's flux starts at its largest and would
+    // "break through" in the first step
+    for (int i = 1; i < n && sign < 0; i++) {
       double j = sign * rate[i] / area;
       if (j >= level) {
         // the rate of a row is its step's mean: it stands for the step's middle

@@ -49,7 +49,7 @@ final class PermeationSection {
               String.format(Locale.ROOT, "%.6g", area),
               number(f.path("steady_flux")),
               time(f.path("time_lag")),
-              time(f.path("breakthrough"))));
+              out ? time(f.path("breakthrough")) : "exit faces only"));
     }
     if (plot.hasData()) {
       doc.picture("report-permeation.png", "Flux per unit area over time", plot.png());
@@ -59,7 +59,7 @@ final class PermeationSection {
         "Steady flux: the flux at the end when it changed by less than 1 % over the last fifth"
             + " of the run. Time lag: where the straight line the cumulative flow approaches"
             + " crosses the time axis (Daynes–Barrer); an entry face's lies before the start."
-            + " Breakthrough: the first time the flux reached "
+            + " Breakthrough (exit faces): the first time the flux reached "
             + String.format(Locale.ROOT, "%.3g", 100 * share)
             + " % of the steady flux. \"not reached\" where the flux did not become steady.");
     doc.table(
