@@ -33,17 +33,8 @@ final class CatalogLawResolver implements LawResolver {
                         source,
                         source.path() + ".law",
                         catalog.unknownLawMessage(source.id())));
-    LawBinding.Result bound = LawBinding.bind(entry.provider(), source.parameters());
-    if (!bound.problems().isEmpty()) {
-      List<CaseInputException.Problem> problems = new ArrayList<>();
-      for (LawBinding.Problem p : bound.problems()) {
-        problems.add(
-            new CaseInputException.Problem(
-                source.line(), source.column(), source.path() + "." + p.key(), p.message()));
-      }
-      throw new CaseInputException(caseName, problems);
-    }
-    LawParameters values = bound.parameters().orElseThrow();
+    LawParameters values =
+        parametersOrThrow(caseName, source, LawBinding.bind(entry.provider(), source.parameters()));
     SourceLaw law;
     try {
       law = GuardedLaw.create(entry, values, material).law();
@@ -70,7 +61,23 @@ final class CatalogLawResolver implements LawResolver {
                         source,
                         source.path() + ".law",
                         catalog.unknownFaceLawMessage(source.id())));
-    LawBinding.Result bound = LawBinding.bind(entry.provider(), source.parameters());
+    LawParameters values =
+        parametersOrThrow(caseName, source, LawBinding.bind(entry.provider(), source.parameters()));
+    try {
+      return new dev.soakfield.fem.model.FaceLawUse(
+          entry.id(), entry.describe(), entry.provider().create(values));
+    } catch (IllegalArgumentException e) {
+      throw problem(
+          caseName,
+          source,
+          source.path(),
+          "face law '" + source.id() + "' rejects these parameters: " + e.getMessage());
+    }
+  }
+
+  /** The bound values, or every binding problem at the law entry's keys. */
+  private static LawParameters parametersOrThrow(
+      String caseName, SourceSpec.LawSource source, LawBinding.Result bound) {
     if (!bound.problems().isEmpty()) {
       List<CaseInputException.Problem> problems = new ArrayList<>();
       for (LawBinding.Problem p : bound.problems()) {
@@ -80,16 +87,7 @@ final class CatalogLawResolver implements LawResolver {
       }
       throw new CaseInputException(caseName, problems);
     }
-    try {
-      return new dev.soakfield.fem.model.FaceLawUse(
-          entry.id(), entry.describe(), entry.provider().create(bound.parameters().orElseThrow()));
-    } catch (IllegalArgumentException e) {
-      throw problem(
-          caseName,
-          source,
-          source.path(),
-          "face law '" + source.id() + "' rejects these parameters: " + e.getMessage());
-    }
+    return bound.parameters().orElseThrow();
   }
 
   private static CaseInputException problem(

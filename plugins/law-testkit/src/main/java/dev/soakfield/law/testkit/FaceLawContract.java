@@ -8,14 +8,11 @@ import static org.junit.jupiter.api.Assertions.fail;
 import dev.soakfield.law.api.FaceLaw;
 import dev.soakfield.law.api.FaceLawProvider;
 import dev.soakfield.law.api.FacePoint;
-import dev.soakfield.law.api.LawParameter;
 import dev.soakfield.law.api.ParameterBinder;
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.ServiceLoader;
-import java.util.Set;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -115,28 +112,7 @@ public abstract class FaceLawContract {
   public void declarationsAreSane() {
     FaceLawProvider p = provider();
     ParameterBinder binder = ParameterBinder.find();
-    assertTrue(p.id().matches("[a-z0-9]+(-[a-z0-9]+)*"), "id '" + p.id() + "'");
-    assertFalse(p.description().isBlank(), "description");
-    Set<String> names = new HashSet<>();
-    for (LawParameter d : p.parameters()) {
-      assertTrue(names.add(d.name()), "parameter '" + d.name() + "' declared twice");
-      assertFalse(d.name().equals(ParameterBinder.LAW_KEY), "'law' is the key naming the law");
-      assertTrue(d.name().matches("[a-z0-9]+(-[a-z0-9]+)*"), "parameter name '" + d.name() + "'");
-      assertFalse(d.description().isBlank(), d.name() + ": description");
-      if (!d.isRequired()) {
-        assertTrue(
-            d.defaultValue() >= d.minimum() && d.defaultValue() <= d.maximum(),
-            d.name() + ": default " + d.defaultValue() + " outside its range");
-      }
-      double probe = d.isRequired() ? d.minimum() : d.defaultValue();
-      if (Double.isFinite(probe)) {
-        try {
-          assertEquals(probe, binder.inUnit(Double.toString(probe), d.unit()), d.name());
-        } catch (IllegalArgumentException e) {
-          fail(d.name() + ": unit '" + d.unit() + "' does not parse: " + e.getMessage());
-        }
-      }
-    }
+    Declarations.check(p.id(), p.description(), p.parameters(), binder, d -> {});
     assertTrue(binder.bind(p, parameters()).problems().isEmpty(), "parameters() bind");
   }
 

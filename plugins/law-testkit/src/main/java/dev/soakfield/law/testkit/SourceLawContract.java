@@ -5,16 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
-import dev.soakfield.law.api.LawParameter;
 import dev.soakfield.law.api.ParameterBinder;
 import dev.soakfield.law.api.SourceLaw;
 import dev.soakfield.law.api.SourceLawProvider;
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.ServiceLoader;
-import java.util.Set;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -97,29 +94,12 @@ public abstract class SourceLawContract {
   public void declarationsAreSane() {
     SourceLawProvider p = provider();
     ParameterBinder binder = ParameterBinder.find();
-    assertTrue(p.id().matches("[a-z0-9]+(-[a-z0-9]+)*"), "id '" + p.id() + "'");
-    assertFalse(p.description().isBlank(), "description");
-    Set<String> names = new HashSet<>();
-    for (LawParameter d : p.parameters()) {
-      assertTrue(names.add(d.name()), "parameter '" + d.name() + "' declared twice");
-      assertFalse(d.name().equals(ParameterBinder.LAW_KEY), "'law' is the key naming the law");
-      assertTrue(d.name().matches("[a-z0-9]+(-[a-z0-9]+)*"), "parameter name '" + d.name() + "'");
-      assertFalse(d.description().isBlank(), d.name() + ": description");
-      assertFalse(d.unit().isBlank(), d.name() + ": unit (\"1\" for a pure number)");
-      double probe = d.isRequired() ? d.minimum() : d.defaultValue();
-      if (!d.isRequired()) {
-        assertTrue(
-            d.defaultValue() >= d.minimum() && d.defaultValue() <= d.maximum(),
-            d.name() + ": default " + d.defaultValue() + " outside its range");
-      }
-      if (Double.isFinite(probe)) {
-        try {
-          assertEquals(probe, binder.inUnit(Double.toString(probe), d.unit()), d.name());
-        } catch (IllegalArgumentException e) {
-          fail(d.name() + ": unit '" + d.unit() + "' does not parse: " + e.getMessage());
-        }
-      }
-    }
+    Declarations.check(
+        p.id(),
+        p.description(),
+        p.parameters(),
+        binder,
+        d -> assertFalse(d.unit().isBlank(), d.name() + ": unit (\"1\" for a pure number)"));
     assertTrue(binder.bind(p, parameters()).problems().isEmpty(), "parameters() bind");
   }
 
