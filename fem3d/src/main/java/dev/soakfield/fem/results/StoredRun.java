@@ -204,6 +204,11 @@ public final class StoredRun {
     return VtuReader.outline(framePath(0)).pointFields();
   }
 
+  /** The cell (per-element) fields the frames hold (those of the first frame), in file order. */
+  public List<String> cellFieldNames() {
+    return VtuReader.outline(framePath(0)).cellFields();
+  }
+
   /** The whole grid of one frame (its mesh and every field), read from its file. */
   public VtuGrid frame(int frame) {
     return VtuReader.read(framePath(frame));
@@ -218,5 +223,16 @@ public final class StoredRun {
   public synchronized double[] field(int frame, String fieldName) {
     return cache.computeIfAbsent(
         frame + "/" + fieldName, k -> VtuReader.pointField(framePath(frame), fieldName));
+  }
+
+  /**
+   * The per-element field of one frame, one value per tetrahedron in mesh order; read and kept as
+   * {@link #field}.
+   *
+   * @throws MeshInputException when the frame's file lacks it
+   */
+  public synchronized double[] cellField(int frame, String fieldName) {
+    return cache.computeIfAbsent(
+        frame + "/cell/" + fieldName, k -> VtuReader.cellField(framePath(frame), fieldName));
   }
 }

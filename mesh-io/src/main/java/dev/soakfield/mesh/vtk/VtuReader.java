@@ -60,8 +60,9 @@ public final class VtuReader {
    * @param points the Piece's NumberOfPoints
    * @param cells the Piece's NumberOfCells
    * @param pointFields the names of its PointData arrays, in file order
+   * @param cellFields the names of its CellData arrays, in file order
    */
-  public record Outline(int points, int cells, List<String> pointFields) {}
+  public record Outline(int points, int cells, List<String> pointFields, List<String> cellFields) {}
 
   /**
    * Reads the file.
@@ -82,13 +83,8 @@ public final class VtuReader {
    */
   public static Outline outline(Path file) {
     try (Opened o = open(file)) {
-      List<String> names = new ArrayList<>();
-      for (Declared d : o.header.arrays) {
-        if (d.section.equals("PointData")) {
-          names.add(d.name);
-        }
-      }
-      return new Outline(o.header.points, o.header.cells, List.copyOf(names));
+      return new Outline(
+          o.header.points, o.header.cells, names(o, "PointData"), names(o, "CellData"));
     }
   }
 
@@ -99,20 +95,34 @@ public final class VtuReader {
    * @throws MeshInputException as {@link #read}, and when the file has no such point field
    */
   public static double[] pointField(Path file, String name) {
+    return oneField(file, "PointData", name, "a point field '" + name + "'");
+  }
+
+  /**
+   * One cell field of a file (one value per cell for a scalar), decoded alone as {@link
+   * #pointField}.
+   *
+   * @throws MeshInputException as {@link #read}, and when the file has no such cell field
+   */
+  public static double[] cellField(Path file, String name) {
+    return oneField(file, "CellData", name, "a cell field '" + name + "'");
+  }
+
+  private static double[] oneField(Path file, String section, String name, String expected) {
     try (Opened o = open(file)) {
+      long entries = section.equals("PointData") ? o.header.points : o.header.cells;
       for (Declared d : o.header.arrays) {
-        if (d.section.equals("PointData") && d.name.equals(name)) {
-          return doubles(o.source, d, bytes(o, d), (long) d.components * o.header.points);
+        if (d.section.equals(section) && d.name.equals(name)) {
+          return doubles(o.source, d, bytes(o, d), d.components * entries);
         }
       }
-      throw new MeshInputException(
-          o.source, "PointData", "the fields " + outlineNames(o), "a point field '" + name + "'");
+      throw new MeshInputException(o.source, section, "the fields " + names(o, section), expected);
     }
   }
 
-  private static List<String> outlineNames(Opened o) {
+  private static List<String> names(Opened o, String section) {
     return o.header.arrays.stream()
-        .filter(d -> d.section.equals("PointData"))
+        .filter(d -> d.section.equals(section))
         .map(d -> d.name)
         .toList();
   }

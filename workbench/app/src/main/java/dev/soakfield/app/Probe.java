@@ -4,19 +4,22 @@ import dev.soakfield.fem.results.StoredRun;
 import java.util.Optional;
 
 /**
- * A point placed on the surface by a click, with the field there through time: the field is
- * interpolated linearly between the corners of the picked triangle (barycentric weights).
+ * A point placed on the surface by a click, with the field there through time: a nodal field is
+ * interpolated linearly between the corners of the picked triangle (barycentric weights), a
+ * per-element field is the value of the tetrahedron the triangle bounds.
  */
 public final class Probe {
   private final double[] point;
   private final int[] nodes;
   private final double[] weights;
+  private final int tet;
   private final String where;
 
-  private Probe(double[] point, int[] nodes, double[] weights, String where) {
+  private Probe(double[] point, int[] nodes, double[] weights, int tet, String where) {
     this.point = point;
     this.nodes = nodes;
     this.weights = weights;
+    this.tet = tet;
     this.where = where;
   }
 
@@ -35,7 +38,7 @@ public final class Probe {
       }
     }
     double[] w = barycentric(p, c[0], c[1], c[2]);
-    return new Probe(p, n, w, scene.describe(hit));
+    return new Probe(p, n, w, surf.tet(hit.triangle()), scene.describe(hit));
   }
 
   /** Barycentric weights of p in triangle (a, b, c), by sub-triangle areas along its normal. */
@@ -89,7 +92,11 @@ public final class Probe {
     StoredRun r = study.results().get();
     double[] v = new double[r.frameCount()];
     for (int f = 0; f < v.length; f++) {
-      v[f] = valueOf(r.field(f, field.fileName));
+      // a per-element field is the value of the tetrahedron under the probe
+      v[f] =
+          field.perElement
+              ? FrameValues.perElement(r, f, field)[tet]
+              : valueOf(r.field(f, field.fileName));
     }
     return Optional.of(v);
   }

@@ -126,8 +126,24 @@ public final class Scene {
     if (f.isEmpty() || r.isEmpty()) {
       return Optional.empty();
     }
-    int frame = Math.max(0, Math.min(settings.frame(), r.get().frameCount() - 1));
-    return Optional.of(r.get().field(frame, f.get().fileName));
+    return Optional.of(FrameValues.nodal(r.get(), frame(r.get()), f.get(), study.geometry()));
+  }
+
+  private int frame(StoredRun r) {
+    return Math.max(0, Math.min(settings.frame(), r.frameCount() - 1));
+  }
+
+  /**
+   * The values the surface is coloured by: per tetrahedron for a per-element field (each triangle
+   * flat in its tetrahedron's value, as that field is), else the nodal values.
+   */
+  private double[] surfaceValues(double[] nodal) {
+    FieldKind f = settings.field().orElseThrow();
+    if (!f.perElement) {
+      return nodal;
+    }
+    StoredRun r = study.results().orElseThrow();
+    return FrameValues.perElement(r, frame(r), f);
   }
 
   private void colourSurface(Optional<double[]> values) {
@@ -135,7 +151,8 @@ public final class Scene {
     float[] colours = new float[9 * tris];
     float[] ramp = new float[3 * tris];
     if (values.isPresent()) {
-      double[] v = values.get();
+      double[] v = surfaceValues(values.get());
+      boolean perElement = settings.field().orElseThrow().perElement;
       if (settings.autoRange()) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
@@ -162,7 +179,7 @@ public final class Scene {
       boolean never = settings.field().orElseThrow().isTime();
       for (int t = 0; t < tris; t++) {
         for (int k = 0; k < 3; k++) {
-          double x = v[surface.node(t, k)];
+          double x = v[perElement ? surface.tet(t) : surface.node(t, k)];
           ramp[3 * t + k] = never && x < 0 ? -1f : (float) clamp01((x - low) / (high - low));
           setColour(colours, 3 * t + k, 0x8c8c8c);
         }

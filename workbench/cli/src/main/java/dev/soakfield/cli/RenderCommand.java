@@ -53,7 +53,9 @@ final class RenderCommand implements Callable<Integer> {
       defaultValue = "c",
       paramLabel = "NAME",
       description =
-          "c, phi, first_exceed, or groups for the face groups in their colours (default: ${DEFAULT-VALUE}).")
+          "c, phi, first_exceed, error_indicator (the estimated error per element: where a finer"
+              + " mesh would help), trapped:<part>:<name>, or groups for the face groups in their"
+              + " colours (default: ${DEFAULT-VALUE}).")
   String field;
 
   @Option(

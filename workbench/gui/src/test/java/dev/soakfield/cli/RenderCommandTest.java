@@ -155,7 +155,10 @@ class RenderCommandTest {
         CliRun.of("render", results.toString(), "--field", "rh", "--out", pic.toString());
     assertEquals(2, field.exitCode());
     assertTrue(
-        field.err().contains("found 'rh', expected c, phi, first_exceed or trapped:<part>:<name>"),
+        field
+            .err()
+            .contains(
+                "found 'rh', expected c, phi, first_exceed, error_indicator or trapped:<part>:<name>"),
         field.err());
     CliRun folder = CliRun.of("render", dir.toString(), "--out", pic.toString());
     assertEquals(2, folder.exitCode());
