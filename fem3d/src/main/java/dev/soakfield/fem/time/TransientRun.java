@@ -103,7 +103,7 @@ public final class TransientRun {
       double theta = TimeSettings.thetaOfStep(s.crankNicolson(), sinceRestart);
       StepOutcome out;
       try {
-        out = stepper.step(phi, t, tryDt, theta);
+        out = stepper.step(phi, t, tryDt, theta, previous, previousDt);
       } catch (StepNotConvergedException e) {
         // a nonlinear step that does not converge is retried a quarter as long
         rejected++;
@@ -147,7 +147,8 @@ public final class TransientRun {
             t, "the solution became non-finite after t = " + t + " s; no results were kept", null);
       }
       double error = 0;
-      if (s.adaptive() && previous != null) {
+      boolean estimated = s.adaptive() && previous != null;
+      if (estimated) {
         scale = Math.max(scale, maxAbs(next));
         error = localError(previous, previousDt, phi, next, tryDt) / Math.max(scale, 1e-300);
         if (error > s.tolerance() && tryDt > minStep) {
@@ -196,8 +197,11 @@ public final class TransientRun {
         return new RunTotals(steps, rejected, iterations, phi, t);
       }
       if (s.adaptive()) {
+        // a step with no estimate (the first, or the first after a kink) grows by 2; one the
+        // extrapolation predicted exactly (the solves started from it and needed no iteration)
+        // grows by the most allowed
         double grow =
-            error == 0
+            !estimated
                 ? 2.0
                 : Math.min(
                     GROWTH_LIMIT, Math.max(SHRINK_LIMIT, 0.9 * Math.sqrt(s.tolerance() / error)));
