@@ -3,6 +3,7 @@ package dev.soakfield.fem.run;
 import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.casefile.ThresholdSpec;
 import dev.soakfield.fem.post.SpaceErrorEstimate;
+import dev.soakfield.fem.post.ThresholdTimeError;
 import dev.soakfield.fem.post.TimeErrorTrack;
 import dev.soakfield.fem.results.StateBundle;
 import dev.soakfield.mesh.TetMesh;
@@ -135,11 +136,10 @@ final class AccuracyWatch {
         }
         int q = 1 + probeCount + i;
         double rate = (now - previousWatched[i]) / (r.t() - previousTime);
-        double valueError = spaceError(i, space) + finite(track.estimates()[q]);
-        double second = track.secondDerivative(q);
-        double interpolation = Double.isNaN(second) ? 0 : dt * dt * Math.abs(second) / 8;
         thresholdSeconds[i] =
-            rate == 0 ? Double.POSITIVE_INFINITY : (valueError + interpolation) / Math.abs(rate);
+            ThresholdTimeError.of(
+                    spaceError(i, space), track.estimates()[q], rate, dt, track.secondDerivative(q))
+                .seconds();
       }
       previousWatched[i] = now;
     }
@@ -160,7 +160,7 @@ final class AccuracyWatch {
     int k = thresholdIndex[i];
     double[] e = space.elementErrors();
     return switch (thresholds.get(i).where().kind()) {
-      case PROBE -> probeError(k, e);
+      case PROBE -> probeError(k, space);
       case MEAN -> {
         boolean[] part = new boolean[mesh.volumeGroups().size()];
         part[k] = true;
@@ -178,9 +178,9 @@ final class AccuracyWatch {
     };
   }
 
-  private double probeError(int p, double[] elementErrors) {
+  private double probeError(int p, SpaceErrorEstimate space) {
     int t = probeTets[p];
-    return t < 0 ? Double.NaN : Math.abs(elementErrors[t]) / scales[mesh.tetGroup(t)];
+    return t < 0 ? Double.NaN : space.pointError(mesh, t) / scales[mesh.tetGroup(t)];
   }
 
   /**
@@ -218,7 +218,7 @@ final class AccuracyWatch {
       double rel =
           lastSpace == null
               ? Double.NaN
-              : (probeError(p, lastSpace.elementErrors()) + finite(time[1 + p])) / Math.abs(value);
+              : (probeError(p, lastSpace) + finite(time[1 + p])) / Math.abs(value);
       probes.put(spec.probes().get(p).name(), number(rel));
     }
     root.put("probes", probes);

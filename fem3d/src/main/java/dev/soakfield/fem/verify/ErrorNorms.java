@@ -4,17 +4,17 @@ import dev.soakfield.fem.element.TetQuadrature;
 import dev.soakfield.mesh.TetMesh;
 
 /**
- * ‖u_h − u‖ in L² and |u_h − u| in H¹ (the seminorm, ‖∇u_h − ∇u‖) over a mesh, by the degree-5 rule
- * on each element's own map, and the integral of u_h (the amount when u_h is c). Elements of degree
- * p should give L² errors falling as h^(p+1) and H¹ errors as h^p for smooth u (S. C. Brenner and
- * L. R. Scott, The Mathematical Theory of Finite Element Methods, 3rd ed. (2008), Thm 4.4.20 and
- * ch. 5).
+ * ‖u_h − u‖ in L¹ and L² and |u_h − u| in H¹ (the seminorm, ‖∇u_h − ∇u‖) over a mesh, by the
+ * degree-5 rule on each element's own map, and the integral of u_h (the amount when u_h is c).
+ * Elements of degree p should give L² errors falling as h^(p+1) and H¹ errors as h^p for smooth u
+ * (S. C. Brenner and L. R. Scott, The Mathematical Theory of Finite Element Methods, 3rd ed.
+ * (2008), Thm 4.4.20 and ch. 5).
  */
 final class ErrorNorms {
   private ErrorNorms() {}
 
-  /** The two errors: {@code l2} and {@code h1} (seminorm). */
-  record Errors(double l2, double h1) {}
+  /** The errors: {@code l2}, {@code h1} (seminorm) and {@code l1} (∫|u_h − u| dV). */
+  record Errors(double l2, double h1, double l1) {}
 
   /**
    * The errors of field {@code uh} (one value per node) against {@code exact}, optionally weighted
@@ -27,6 +27,7 @@ final class ErrorNorms {
     double[] g = new double[3];
     double l2 = 0;
     double h1 = 0;
+    double l1 = 0;
     for (int e = 0; e < mesh.tetCount(); e++) {
       double w = weight == null ? 1.0 : weight[e];
       for (int k = 0; k < q.size(); k++) {
@@ -42,11 +43,12 @@ final class ErrorNorms {
         double gx = w * gh[0] - g[0];
         double gy = w * gh[1] - g[1];
         double gz = w * gh[2] - g[2];
+        l1 += dv * Math.abs(d);
         l2 += dv * d * d;
         h1 += dv * (gx * gx + gy * gy + gz * gz);
       }
     }
-    return new Errors(Math.sqrt(l2), Math.sqrt(h1));
+    return new Errors(Math.sqrt(l2), Math.sqrt(h1), l1);
   }
 
   /** ∫ weight·u_h dV over the mesh (weight per tetrahedron, null for 1). */
