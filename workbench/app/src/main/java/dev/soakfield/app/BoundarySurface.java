@@ -37,7 +37,10 @@ public final class BoundarySurface {
    */
   public static BoundarySurface of(PartGeometry g, boolean[] shown) {
     int per = g.nodesPerTet;
-    int[] boundary = unsharedFaces(g, shown, per);
+    int[] boundary = allShown(g, shown) ? exteriorFaces(g, per) : null;
+    if (boundary == null) {
+      boundary = unsharedFaces(g, shown, per);
+    }
     int[] groupTable = faceGroupTable(g);
     int sub = per == 4 ? 1 : 4;
     int count = boundary.length;
@@ -92,7 +95,7 @@ public final class BoundarySurface {
    * millions of faces paid a cache miss per probe and another to read the stored face back. A face
    * met a third time (a non-manifold mesh) stays on the surface.
    */
-  private static int[] unsharedFaces(PartGeometry g, boolean[] shown, int per) {
+  static int[] unsharedFaces(PartGeometry g, boolean[] shown, int per) {
     int tets = g.tetCount();
     int[] start = new int[g.nodeCount() + 1];
     int[] c = new int[3];
@@ -142,6 +145,103 @@ public final class BoundarySurface {
       if (!shared[i]) {
         out[k++] = ids[i];
       }
+    }
+    return out;
+  }
+
+  private static boolean allShown(PartGeometry g, boolean[] shown) {
+    for (int p = 0; p < Math.min(shown.length, g.partNames().size()); p++) {
+      if (!shown[p]) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  /**
+   * With every part shown, the outer surface is the faces of the exterior face groups, which the
+   * import fills with every exterior face (the untagged ones in a group of their own): finding each
+   * one's tetrahedron through the tetrahedra around its smallest corner reads a few million numbers
+   * where matching every tetrahedron face against every other reads tens of millions. The result is
+   * the same faces in the same order as {@link #unsharedFaces}; null when the groups do not make a
+   * closed surface of faces each of one tetrahedron (a mesh built without the import's rules), and
+   * the caller matches faces instead.
+   */
+  static int[] exteriorFaces(PartGeometry g, int per) {
+    int faces = g.faces.length / g.nodesPerFace;
+    int count = 0;
+    for (int f = 0; f < faces; f++) {
+      count += g.exteriorGroup[g.faceGroupOfFace[f]] ? 1 : 0;
+    }
+    if (count == 0) {
+      return null;
+    }
+    int nodes = g.nodeCount();
+    int tets = g.tetCount();
+    int[] start = new int[nodes + 1];
+    for (int t = 0; t < tets; t++) {
+      for (int k = 0; k < 4; k++) {
+        start[g.tets[t * per + k] + 1]++;
+      }
+    }
+    for (int v = 0; v < nodes; v++) {
+      start[v + 1] += start[v];
+    }
+    int[] around = new int[start[nodes]];
+    int[] next = Arrays.copyOf(start, nodes);
+    for (int t = 0; t < tets; t++) {
+      for (int k = 0; k < 4; k++) {
+        around[next[g.tets[t * per + k]]++] = t;
+      }
+    }
+    long[] keyed = new long[count]; // smallest corner, then face id: unsharedFaces' order
+    long[] edges = new long[3 * count];
+    int[] a = new int[3];
+    int[] c = new int[3];
+    int k = 0;
+    for (int f = 0; f < faces; f++) {
+      if (!g.exteriorGroup[g.faceGroupOfFace[f]]) {
+        continue;
+      }
+      faceCorners(g, f, a);
+      int id = -1;
+      for (int i = start[a[0]]; i < start[a[0] + 1]; i++) {
+        int t = around[i];
+        for (int lf = 0; lf < 4; lf++) {
+          corners(g.tets, per, t, lf, c);
+          if (c[0] == a[0] && c[1] == a[1] && c[2] == a[2]) {
+            if (id >= 0) {
+              return null; // a face of two tetrahedra in an exterior group
+            }
+            id = 4 * t + lf;
+          }
+        }
+      }
+      if (id < 0) {
+        return null; // a face of no tetrahedron
+      }
+      keyed[k] = ((long) a[0] << 32) | id;
+      edges[3 * k] = ((long) a[0] << 32) | a[1];
+      edges[3 * k + 1] = ((long) a[1] << 32) | a[2];
+      edges[3 * k + 2] = ((long) a[0] << 32) | a[2];
+      k++;
+    }
+    // a closed surface uses every edge an even number of times; a missing face leaves odd ones
+    Arrays.sort(edges);
+    for (int i = 0; i < edges.length; ) {
+      int j = i;
+      while (j < edges.length && edges[j] == edges[i]) {
+        j++;
+      }
+      if ((j - i) % 2 != 0) {
+        return null;
+      }
+      i = j;
+    }
+    Arrays.sort(keyed);
+    int[] out = new int[count];
+    for (int i = 0; i < count; i++) {
+      out[i] = (int) keyed[i];
     }
     return out;
   }

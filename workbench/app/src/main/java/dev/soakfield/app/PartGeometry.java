@@ -1,6 +1,7 @@
 package dev.soakfield.app;
 
 import dev.soakfield.mesh.FaceGroup;
+import dev.soakfield.mesh.FaceGroupKind;
 import dev.soakfield.mesh.TetMesh;
 import dev.soakfield.mesh.VolumeGroup;
 import java.util.ArrayList;
@@ -18,6 +19,10 @@ public final class PartGeometry {
   final int[] faces;
   final int nodesPerFace;
   final int[] faceGroupOfFace;
+
+  /** Per face group: its faces lie on the outside (each belongs to one tetrahedron). */
+  final boolean[] exteriorGroup;
+
   private final List<String> partNames;
   private final List<String> faceGroupNames;
   private final double[] bounds;
@@ -36,7 +41,9 @@ public final class PartGeometry {
       parts.add(g.name());
     }
     List<String> groups = new ArrayList<>();
+    this.exteriorGroup = new boolean[mesh.faceGroups().size()];
     for (FaceGroup g : mesh.faceGroups()) {
+      exteriorGroup[groups.size()] = g.kind() == FaceGroupKind.EXTERIOR;
       groups.add(g.name());
     }
     this.partNames = List.copyOf(parts);
