@@ -214,8 +214,8 @@ public final class Manufactured {
     return Check.order(
         String.format(
             Locale.ROOT,
-            "%s, adaptive steps: order of the L2 error at t=0.5 in the tolerance, 1e-2 to 1e-5"
-                + " (error %.2e at 1e-2, %.2e at 1e-5)",
+            "%s, adaptive steps: order of the error in the tolerance, 1e-2 to 1e-5"
+                + " (L2 error at t=0.5 %.2e at 1e-2, %.2e at 1e-5)",
             crank ? "Crank-Nicolson" : "backward Euler",
             e[0],
             e[e.length - 1]),

@@ -14,7 +14,7 @@ class AccuracyEstimatesTest {
   @Test
   void estimatesBracketTheTrueErrors() {
     List<Check> checks = AccuracyEstimates.checks();
-    assertEquals(10, checks.size()); // 5 cases × (at least 1/3, at most 3)
+    assertEquals(14, checks.size()); // 7 cases × (at least 1/3, at most 3)
     for (Check c : checks) {
       assertTrue(c.passed(), c.caseName() + ": ratio " + c.computed());
     }
@@ -30,5 +30,20 @@ class AccuracyEstimatesTest {
     // the series the truth comes from: Crank (1975) eq. 4.18 at D t/L² = 0.1, 0.697882 (its
     // tabulated value, as PlaneSheet uses)
     assertEquals(0.697882, AccuracyEstimates.uptake(0.1), 1e-6);
+  }
+
+  @Test
+  void theAdaptiveSheetIsBracketedAndAnEstimateOffByFourIsNot() {
+    List<Check> checks = AccuracyEstimates.adaptiveTimeChecks();
+    assertEquals(4, checks.size());
+    checks.forEach(c -> assertTrue(c.passed(), c.caseName() + ": ratio " + c.computed()));
+    // negative control: the same estimate four times too large (or small) leaves the bracket
+    double[] be = AccuracyEstimates.timeAdaptive(false, 0.1, 1e-3);
+    assertTrue(
+        AccuracyEstimates.bracket("x4", "control", 4 * be[0], be[1]).stream()
+            .anyMatch(c -> !c.passed()));
+    assertTrue(
+        AccuracyEstimates.bracket("/4", "control", be[0] / 4, be[1]).stream()
+            .anyMatch(c -> !c.passed()));
   }
 }

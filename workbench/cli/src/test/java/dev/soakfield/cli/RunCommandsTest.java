@@ -63,7 +63,7 @@ class RunCommandsTest {
     // every case of Verification.all(): published solutions, conservation (the run's own and
     // the gradient flux), the maximum principle and its control, orders in space (round parts,
     // manufactured) and time, adaptive steps, the damped start, the accuracy estimates
-    assertTrue(r.out().contains("71 passed, 0 failed"), r.out());
+    assertTrue(r.out().contains("75 passed, 0 failed"), r.out());
     assertTrue(r.out().contains("Crank-Nicolson (damped start), time order"), r.out());
     assertTrue(r.out().contains("adaptive steps: order of the error in the tolerance"), r.out());
     assertTrue(r.out().contains("estimate/true error"), r.out());
