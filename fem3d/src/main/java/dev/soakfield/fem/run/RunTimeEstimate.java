@@ -2,7 +2,6 @@ package dev.soakfield.fem.run;
 
 import dev.soakfield.fem.casefile.CaseSpec;
 import dev.soakfield.fem.casefile.StepControl;
-import dev.soakfield.fem.casefile.TimeScheme;
 import dev.soakfield.mesh.TetMesh;
 
 /**
@@ -10,22 +9,16 @@ import dev.soakfield.mesh.TetMesh;
  *
  * <p>Steps: fixed steps are counted (end / step, plus one per output time that splits a step).
  * Adaptive steps grow roughly geometrically from the first step to the end, so their count goes
- * with the decades spanned, log10(end / first step), and with the tolerance as the step control
- * holds it (time.StepErrorRule): backward Euler's error per unit step makes dt ∝ tolerance, so its
- * steps go as 1/tolerance; Crank–Nicolson's error per step makes dt ∝ √tolerance. Wall time: a
- * start-up (JIT, set-up) plus the steps times a cost per node and step. Measured on 2 cores: the
- * sample case (sensor-pod, 1 521 nodes, six decades: 153 backward-Euler steps and 3 rejected at
- * 1e-3, 108 Crank–Nicolson steps) and a 24³-cell box (15 625 nodes, 200 fixed steps, 6.4 s) give
- * {@link #BACKWARD_EULER_STEPS_PER_DECADE}, {@link #CRANK_NICOLSON_STEPS_PER_DECADE}, {@link
- * #START_SECONDS} and {@link #SECONDS_PER_NODE_STEP}. Real runs differ by a factor of a few either
- * way (stiffness, sources, kinks of the exposure, machine).
+ * with the decades spanned, log10(end / first step), and with the square root of 1/tolerance (the
+ * local error of backward Euler is second order in the step). Wall time: a start-up (JIT, set-up)
+ * plus the steps times a cost per node and step. Measured on 2 cores: the sample case (sensor-pod,
+ * 1 521 nodes, 111 adaptive steps, 1.3 s) and a 24³-cell box (15 625 nodes, 200 fixed steps, 6.4 s)
+ * give {@link #STEPS_PER_DECADE}, {@link #START_SECONDS} and {@link #SECONDS_PER_NODE_STEP}. Real
+ * runs differ by a factor of a few either way (stiffness, sources, machine).
  */
 public record RunTimeEstimate(long steps, double seconds) {
-  /** Accepted backward-Euler steps per decade of end / first step at tolerance 1e-3 (measured). */
-  static final double BACKWARD_EULER_STEPS_PER_DECADE = 25;
-
-  /** Accepted Crank–Nicolson steps per decade of end / first step at tolerance 1e-3 (measured). */
-  static final double CRANK_NICOLSON_STEPS_PER_DECADE = 18;
+  /** Accepted adaptive steps per decade of end / first step at tolerance 1e-3 (measured). */
+  static final double STEPS_PER_DECADE = 18;
 
   /** Wall seconds per node and step, assembly and solve included (measured, 2 cores). */
   static final double SECONDS_PER_NODE_STEP = 2e-6;
@@ -43,11 +36,8 @@ public record RunTimeEstimate(long steps, double seconds) {
       StepControl.Adaptive a = (StepControl.Adaptive) spec.time().steps();
       double first = a.initialStep().orElse(end * 1e-6);
       double decades = Math.max(1, Math.log10(end / first));
-      double tighter = StepControl.DEFAULT_TOLERANCE / a.tolerance();
       double perDecade =
-          spec.time().scheme() == TimeScheme.CRANK_NICOLSON
-              ? CRANK_NICOLSON_STEPS_PER_DECADE * Math.sqrt(tighter)
-              : BACKWARD_EULER_STEPS_PER_DECADE * tighter;
+          STEPS_PER_DECADE * Math.sqrt(StepControl.DEFAULT_TOLERANCE / a.tolerance());
       steps = (long) Math.ceil(decades * perDecade) + spec.time().outputs().size();
       if (a.maxStep().isPresent()) {
         steps = Math.max(steps, (long) Math.ceil(end / a.maxStep().getAsDouble()));

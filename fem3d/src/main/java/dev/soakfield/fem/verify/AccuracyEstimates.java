@@ -23,7 +23,7 @@ import java.util.Map;
  * c_h| dV, linear and quadratic elements) on the sphere against Crank's eq. 6.18 and on both
  * manufactured solutions; threshold times part by part ({@link #thresholdChecks}) at a sphere's
  * centre; in time (the estimate from the accepted steps) on the plane sheet against Crank's eq.
- * 4.18, backward Euler and Crank–Nicolson, with fixed and with adaptive steps.
+ * 4.18, backward Euler and Crank–Nicolson.
  */
 public final class AccuracyEstimates {
   private static final String SPACE = "recovered-gradient estimate of the amount error";
@@ -33,7 +33,7 @@ public final class AccuracyEstimates {
   private AccuracyEstimates() {}
 
   /** The ratio estimate / true error as two checks, at least 1/3 and at most 3. */
-  static List<Check> bracket(String name, String source, double estimate, double truth) {
+  private static List<Check> bracket(String name, String source, double estimate, double truth) {
     double ratio = estimate / truth;
     String label = String.format(Locale.ROOT, "%s: estimate/true error (true %.2e)", name, truth);
     return List.of(
@@ -68,22 +68,6 @@ public final class AccuracyEstimates {
    * both faces held at 1 from t = 0 (D = 1, L = 1), to D t/L² = {@code end} with 20 steps.
    */
   static double[] time(boolean crank, double end) {
-    double dt = end / 20;
-    return time(new TimeSettings(end, new double[] {end}, crank, Double.NaN, dt, dt, dt));
-  }
-
-  /**
-   * The same sheet with adaptive steps at {@code tolerance}, from a first step of 1e-6 of the end.
-   */
-  static double[] timeAdaptive(boolean crank, double end, double tolerance) {
-    return time(
-        new TimeSettings(end, new double[] {end}, crank, tolerance, Double.NaN, end * 1e-6, end));
-  }
-
-  /** The sheet run with {@code s}: {estimated, true} time error of the uptake, Crank eq. 4.18. */
-  private static double[] time(TimeSettings s) {
-    boolean crank = s.crankNicolson();
-    double end = s.end();
     TetMesh mesh = StructuredMesher.box(1, 0.1, 0.1, 80, 1, 1, 2);
     DiffusionModel m =
         UniformModels.model(
@@ -97,6 +81,8 @@ public final class AccuracyEstimates {
                 "xmax", UniformModels.Condition.concentration(1.0)));
     ThetaStepper stepper = new ThetaStepper(m, false, 1e-13, 5000);
     TimeErrorTrack track = new TimeErrorTrack(1);
+    double dt = end / 20;
+    TimeSettings s = new TimeSettings(end, new double[] {end}, crank, Double.NaN, dt, dt, dt);
     int[] steps = {0};
     double[] last = {0};
     TransientRun.run(
@@ -306,26 +292,6 @@ public final class AccuracyEstimates {
           bracket(
               (crank ? "Crank-Nicolson" : "backward Euler")
                   + ", 20 fixed steps, sheet uptake at Dt/L^2=0.1",
-              TIME + "; Crank (1975) eq. 4.18",
-              r[0],
-              r[1]));
-    }
-    all.addAll(adaptiveTimeChecks());
-    return all;
-  }
-
-  /**
-   * Time, adaptive steps: the sheet to D t/L² = 0.1 at tolerance 1e-3, backward Euler (error per
-   * unit step) and Crank–Nicolson (error per step); measured ratios 0.93 and 1.01.
-   */
-  static List<Check> adaptiveTimeChecks() {
-    List<Check> all = new ArrayList<>();
-    for (boolean crank : new boolean[] {false, true}) {
-      double[] r = timeAdaptive(crank, 0.1, 1e-3);
-      all.addAll(
-          bracket(
-              (crank ? "Crank-Nicolson" : "backward Euler")
-                  + ", adaptive steps at 1e-3, sheet uptake at Dt/L^2=0.1",
               TIME + "; Crank (1975) eq. 4.18",
               r[0],
               r[1]));

@@ -26,7 +26,7 @@ class ProgressRelayTest {
             { "mesh": "sheet.msh",
               "materials": { "body": { "diffusivity": 1e-10 } },
               "faces": { "xmin": { "kind": "concentration", "value": 1.0 } },
-              "time": { "end": 2000, "tolerance": 1e-3, "initial_step": 500 } }
+              "time": { "end": 2000, "tolerance": 1e-5, "initial_step": 500 } }
             """);
     int[] last = {0, 0};
     double[] time = {0};
