@@ -19,8 +19,14 @@ import dev.soakfield.fem.assembly.CsrMatrix;
  * runs every vector operation single-threaded and separately (eight passes).
  */
 final class FusedCg {
-  /** What a solve ended with. */
-  record Outcome(int iterations, double residual, boolean converged, boolean brokeDown) {}
+  /**
+   * What a solve ended with.
+   *
+   * @param residualSum Σ r_i of the final residual b − A x (unscaled): what the solve leaves of the
+   *     rows' balance
+   */
+  record Outcome(
+      int iterations, double residual, boolean converged, boolean brokeDown, double residualSum) {}
 
   private double[] r = new double[0];
   private double[] z = new double[0];
@@ -56,23 +62,27 @@ final class FusedCg {
     int[] cols = a.cols();
     double[] values = a.values();
     int parts = RowSlices.slicesFor(n);
-    double[] partial = new double[3 * parts];
+    double[] partial = new double[4 * parts];
     // r = b − A x and its norm
     RowSlices.run(
         parts,
         s -> {
           double norm = 0;
+          double rsum = 0;
           for (int i = from(n, parts, s), to = from(n, parts, s + 1); i < to; i++) {
             double ri = b[i] - row(rs, cols, values, i, x);
             r[i] = ri;
+            rsum += ri;
             double e = ri * inverseDiagonal[i];
             norm += e * e;
           }
           partial[s] = norm;
+          partial[3 * parts + s] = rsum;
         });
     double residual = Math.sqrt(sum(partial, parts, 0));
     if (!(residual > target)) {
-      return new Outcome(0, residual, residual <= target, Double.isNaN(residual));
+      return new Outcome(
+          0, residual, residual <= target, Double.isNaN(residual), sum(partial, parts, 3 * parts));
     }
     double rho = precondition(amg, inverseDiagonal, n, parts, partial);
     // p = z
@@ -109,23 +119,26 @@ final class FusedCg {
           s -> {
             double norm = 0;
             double rz = 0;
+            double rsum = 0;
             for (int i = from(n, parts, s), to = from(n, parts, s + 1); i < to; i++) {
               x[i] += alpha * p[i];
               double ri = r[i] - alpha * q[i];
               r[i] = ri;
+              rsum += ri;
               double e = ri * inverseDiagonal[i];
               norm += e * e;
               rz += ri * e;
             }
             partial[s] = norm;
             partial[parts + s] = rz;
+            partial[3 * parts + s] = rsum;
           });
       residual = Math.sqrt(sum(partial, parts, 0));
       if (!Double.isFinite(residual)) {
-        return new Outcome(k, Double.NaN, false, true);
+        return new Outcome(k, Double.NaN, false, true, Double.NaN);
       }
       if (residual <= target) {
-        return new Outcome(k, residual, true, false);
+        return new Outcome(k, residual, true, false, sum(partial, parts, 3 * parts));
       }
       double rhoNew =
           jacobi
@@ -143,7 +156,7 @@ final class FusedCg {
             }
           });
     }
-    return new Outcome(maxIterations, residual, false, false);
+    return new Outcome(maxIterations, residual, false, false, sum(partial, parts, 3 * parts));
   }
 
   /** z = M⁻¹ r and r·z (with Jacobi only r·z: z is formed where it is used). */

@@ -140,7 +140,8 @@ public final class PcgSolver {
     }
     if (rhsNorm == 0) {
       Arrays.fill(x, 0.0);
-      return new SolveStats(0, 0.0, 0.0, true, setupSeconds, (System.nanoTime() - start) * 1e-9);
+      return new SolveStats(
+          0, 0.0, 0.0, true, setupSeconds, (System.nanoTime() - start) * 1e-9, 0.0);
     }
     // CG's dot products square the residual: far from 1 they underflow (a specimen desorbed to
     // 1e-150 and less) or overflow, and α = 0/0 ends the solve in NaN. Solving for x/s with s =
@@ -175,7 +176,8 @@ public final class PcgSolver {
             rhsNorm,
             o.converged(),
             setupSeconds,
-            (System.nanoTime() - start) * 1e-9);
+            (System.nanoTime() - start) * 1e-9,
+            o.residualSum() * scale);
     if (!o.converged()) {
       throw new SolverStalledException(stats, relativeTolerance, active, o.brokeDown());
     }

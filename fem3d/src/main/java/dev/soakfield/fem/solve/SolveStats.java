@@ -9,6 +9,7 @@ package dev.soakfield.fem.solve;
  * @param converged whether ‖D⁻¹r‖ ≤ rtol·‖D⁻¹b‖ was reached
  * @param setupSeconds time spent building the preconditioner for the current matrix
  * @param solveSeconds time spent in this solve
+ * @param residualSum Σ r_i of the final residual b − A x, as tracked by CG (0 when b = 0)
  */
 public record SolveStats(
     int iterations,
@@ -16,7 +17,8 @@ public record SolveStats(
     double rhsNorm,
     boolean converged,
     double setupSeconds,
-    double solveSeconds) {
+    double solveSeconds,
+    double residualSum) {
 
   /** ‖D⁻¹r‖/‖D⁻¹b‖, or 0 when b = 0. */
   public double relativeResidual() {

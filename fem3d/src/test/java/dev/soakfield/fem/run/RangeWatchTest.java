@@ -69,7 +69,9 @@ class RangeWatchTest {
     RunSummary s = bake("lumped");
     assertTrue(overshoots(s).isEmpty(), s.warnings().toString());
     Series series = Series.read(s.outputFolder().resolve("series.csv"));
-    assertTrue(series.max("max:body") <= 1 + 1e-12, "max " + series.max("max:body"));
+    // in range to the solves' accuracy (1e-11 of the right-hand side): the conservative shift after
+    // each solve moves every free value by that much at most (measured 2.7e-12 here)
+    assertTrue(series.max("max:body") <= 1 + 1e-11, "max " + series.max("max:body"));
     assertTrue(
         new ObjectMapper()
             .readTree(s.outputFolder().resolve("summary.json").toFile())
