@@ -1,5 +1,6 @@
 package dev.soakfield.fem.verify;
 
+import dev.soakfield.fem.element.ReferenceMap;
 import dev.soakfield.fem.element.TetBasis;
 import dev.soakfield.mesh.TetMesh;
 
@@ -16,7 +17,6 @@ final class ElementField {
   private final double[] n;
   private final double[] dn;
   private final double[] jac = new double[9];
-  private final double[] inv = new double[9];
   private final double[] x = new double[3];
   private final double[] grad = new double[3];
   private double value;
@@ -57,24 +57,7 @@ final class ElementField {
       d1 += u[v] * dn[3 * i + 1];
       d2 += u[v] * dn[3 * i + 2];
     }
-    double c00 = j[4] * j[8] - j[5] * j[7];
-    double c01 = j[5] * j[6] - j[3] * j[8];
-    double c02 = j[3] * j[7] - j[4] * j[6];
-    det = j[0] * c00 + j[1] * c01 + j[2] * c02;
-    double r = 1 / det;
-    inv[0] = c00 * r;
-    inv[1] = (j[2] * j[7] - j[1] * j[8]) * r;
-    inv[2] = (j[1] * j[5] - j[2] * j[4]) * r;
-    inv[3] = c01 * r;
-    inv[4] = (j[0] * j[8] - j[2] * j[6]) * r;
-    inv[5] = (j[2] * j[3] - j[0] * j[5]) * r;
-    inv[6] = c02 * r;
-    inv[7] = (j[1] * j[6] - j[0] * j[7]) * r;
-    inv[8] = (j[0] * j[4] - j[1] * j[3]) * r;
-    // ∇u = J^-T ∂u/∂ξ
-    grad[0] = inv[0] * d0 + inv[3] * d1 + inv[6] * d2;
-    grad[1] = inv[1] * d0 + inv[4] * d1 + inv[7] * d2;
-    grad[2] = inv[2] * d0 + inv[5] * d1 + inv[8] * d2;
+    det = ReferenceMap.gradient(j, d0, d1, d2, grad);
   }
 
   /** The position of the last point evaluated (shared; read only). */
